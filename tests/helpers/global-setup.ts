@@ -1,5 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import knex from 'knex';
+import { migrationSource } from '../../api/migration-source';
 import { TEMPLATE_DB, testDatabaseUrl } from './test-db-config';
 
 /**
@@ -14,7 +15,7 @@ export default async function setup(): Promise<void> {
   const db = knex({
     client: 'pg',
     connection: testDatabaseUrl(TEMPLATE_DB),
-    migrations: { directory: './migrations', extension: 'ts', loadExtensions: ['.ts'] },
+    migrations: { migrationSource },
   });
   try {
     await db.migrate.latest();

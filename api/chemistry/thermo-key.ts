@@ -1,0 +1,58 @@
+/** The parts of a species key that matter for enthalpy lookup (radical marks are dropped). */
+export interface ThermoKeyParts {
+  formula: string;
+  /** State tag without parentheses (`1D`, `aq`, `l`), or null. `(g)` is reported as null. */
+  tag: string | null;
+  /** Charge as written after `^` (`-`, `2+`), or ''. */
+  charge: string;
+  /** Site mark as written (`*`, `*2`), or ''. */
+  sites: string;
+}
+
+// Element symbols, counts and bracket groups; a group must open on an element or another group,
+// which is how the notation tells `(CH3)3` from a state tag such as `(1D)` or `(aq)`.
+const FORMULA = /^(?:[A-Z][a-z]?|\d+|[([](?=[A-Z([])|[)\]])+/;
+const SUFFIX_TOKEN = /\(([^()]+)\)|([•.])|\^(\d*[+-])|\*(\d*)/y;
+
+/**
+ * Splits a species key (`Br•`, `O(1D)`, `Fe(aq)^3+`, `CO*`) into formula, state tag, charge and
+ * sites. Marks after the formula are accepted in any order. Returns null when the key is not a
+ * formula-based species (`hν`, `M`, `*`, `e^-`, declared names and anything malformed).
+ */
+export function parseThermoKey(key: string): ThermoKeyParts | null {
+  const formula = FORMULA.exec(key)?.[0];
+  if (!formula || !balancedBrackets(formula)) return null;
+  const parts: ThermoKeyParts = { formula, tag: null, charge: '', sites: '' };
+  SUFFIX_TOKEN.lastIndex = formula.length;
+  while (SUFFIX_TOKEN.lastIndex < key.length) {
+    const match = SUFFIX_TOKEN.exec(key);
+    if (!match) return null;
+    const [, tag, , charge, sites] = match;
+    if (tag !== undefined) {
+      if (parts.tag !== null) return null;
+      parts.tag = tag;
+    } else if (charge !== undefined) {
+      parts.charge = charge;
+    } else if (sites !== undefined) {
+      parts.sites = `*${sites}`;
+    }
+  }
+  if (parts.tag === 'g') parts.tag = null;
+  return parts;
+}
+
+/** The table key for parts: formula, tag, charge, sites (the canonical order without radical marks). */
+export function tableKey(parts: ThermoKeyParts): string {
+  const tag = parts.tag === null ? '' : `(${parts.tag})`;
+  const charge = parts.charge === '' ? '' : `^${parts.charge}`;
+  return `${parts.formula}${tag}${charge}${parts.sites}`;
+}
+
+function balancedBrackets(formula: string): boolean {
+  const stack: string[] = [];
+  for (const ch of formula) {
+    if (ch === '(' || ch === '[') stack.push(ch === '(' ? ')' : ']');
+    else if ((ch === ')' || ch === ']') && stack.pop() !== ch) return false;
+  }
+  return stack.length === 0;
+}

@@ -1,0 +1,92 @@
+import { MOLAR_PHOTON_ENERGY_KJ_NM } from './constants';
+import { THERMO_RECORDS } from './thermo-data';
+import { createEnthalpyLookup, roundNoise } from './thermo-lookup';
+
+export { createEnthalpyLookup } from './thermo-lookup';
+
+/** ΔfH°(298.15 K) of one species, kJ/mol, with its uncertainty and published source. */
+export interface EnthalpyEntry {
+  key: string;
+  dfH: number;
+  uncertainty: number | null;
+  source: string;
+}
+
+/** Finds the enthalpy of formation of a species by its canonical key, or null when unknown. */
+export type EnthalpyLookup = (speciesKey: string) => EnthalpyEntry | null;
+
+/** The built-in table (`thermo-data/`), with state-tag and radical-mark normalisation. */
+export const builtinEnthalpy: EnthalpyLookup = createEnthalpyLookup(THERMO_RECORDS);
+
+// A photon and a third body take part in a step without an enthalpy of formation of their own.
+const NOT_SPECIES = new Set(['hν', 'hv', 'M']);
+
+export interface ReactionEnthalpy {
+  /** ΔH in kJ/mol, or null when any species is missing. */
+  dH: number | null;
+  missing: string[];
+  used: EnthalpyEntry[];
+  /** √Σ(ν·u)², or null when dH is null or a used value has no stated uncertainty. */
+  uncertainty: number | null;
+}
+
+/**
+ * Reaction enthalpy by Hess's law: ΔH = Σ ν ΔfH°, with ν signed (products +, reactants −).
+ * Terms with the same key are summed first; species whose net coefficient is 0 are not looked up.
+ * `hν`, `hv` and `M` are skipped; every other key the lookup does not know (including the empty
+ * site `*` and `e^-`) is listed in `missing` and makes ΔH null.
+ * @throws Error when a coefficient is not a finite number.
+ */
+export function reactionEnthalpy(
+  terms: { key: string; coef: number }[],
+  lookup: EnthalpyLookup,
+): ReactionEnthalpy {
+  const net = netCoefficients(terms);
+  const missing: string[] = [];
+  const used: EnthalpyEntry[] = [];
+  let dH = 0;
+  let variance: number | null = 0;
+  for (const [key, coef] of net) {
+    const entry = lookup(key);
+    if (!entry) {
+      missing.push(key);
+      continue;
+    }
+    used.push(entry);
+    dH += coef * entry.dfH;
+    variance = entry.uncertainty === null || variance === null ? null : variance + (coef * entry.uncertainty) ** 2;
+  }
+  if (missing.length > 0) return { dH: null, missing, used, uncertainty: null };
+  return { dH: roundNoise(dH), missing, used, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
+}
+
+function netCoefficients(terms: { key: string; coef: number }[]): Map<string, number> {
+  const net = new Map<string, number>();
+  for (const { key, coef } of terms) {
+    if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
+    if (NOT_SPECIES.has(key)) continue;
+    net.set(key, (net.get(key) ?? 0) + coef);
+  }
+  for (const [key, coef] of net) if (Math.abs(coef) < 1e-12) net.delete(key);
+  return net;
+}
+
+/**
+ * Photolysis threshold λ = N_A·h·c / ΔH in nm (CODATA 2018 constants), or null when ΔH ≤ 0 or
+ * is not a finite number (no light needed, or nothing to compute).
+ */
+export function thresholdWavelengthNm(dH: number): number | null {
+  if (!Number.isFinite(dH) || dH <= 0) return null;
+  return MOLAR_PHOTON_ENERGY_KJ_NM / dH;
+}
+
+/** Combines lookups: the first one that knows a species wins (catalogue before built-in table). */
+export function chainLookups(...lookups: EnthalpyLookup[]): EnthalpyLookup {
+  return (speciesKey) => {
+    for (const lookup of lookups) {
+      const entry = lookup(speciesKey);
+      if (entry) return entry;
+    }
+    return null;
+  };
+}

@@ -1,0 +1,37 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { configFromEnv, useFakeGithub } from './config';
+import { createDb } from './db';
+import { createFakeGithub } from './dev/fake-github';
+import { loadEnv } from './env';
+import { createLogger } from './logger';
+
+const env = loadEnv();
+const logger = createLogger(env.LOG_LEVEL);
+const db = createDb(env.DATABASE_URL);
+const app = createApp({ db, config: configFromEnv(env), logger });
+const servers: Server[] = [];
+
+if (useFakeGithub(env)) {
+  servers.push(createFakeGithub().listen(env.FAKE_GITHUB_PORT, '127.0.0.1'));
+  logger.info(`Fake GitHub sign-in on http://127.0.0.1:${env.FAKE_GITHUB_PORT} (development only)`);
+}
+
+const server = app.listen(env.PORT, env.HOST, () => {
+  logger.info(`Cyclewright listening on http://${env.HOST}:${env.PORT}`);
+});
+servers.push(server);
+
+/** Stop taking requests, let the ones in flight finish, then release the pools. */
+async function shutdown(signal: string): Promise<void> {
+  logger.info(`${signal}: shutting down`);
+  const forced = setTimeout(() => process.exit(1), 10_000);
+  forced.unref();
+  await Promise.all(servers.map((s) => new Promise((resolve) => s.close(resolve))));
+  await app.closeResources();
+  await db.destroy();
+  process.exit(0);
+}
+
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));

@@ -3,17 +3,14 @@ import { parseThermoKey, tableKey, type ThermoKeyParts } from './thermo-key';
 import { EXCITED_STATES, GROUND_STATE_TAGS } from './thermo-data/electronic-states';
 import type { EnthalpyEntry, EnthalpyLookup } from './thermo';
 
-/** What a lookup needs from a stored row (the built-in table and catalogue rows both fit). */
-export type EnthalpyRecord = Omit<EnthalpyEntry, 'key'> & { key: string };
-
 /**
- * Builds a lookup over enthalpy records keyed by formula, condensed-phase tag and charge.
+ * Builds a lookup over enthalpy rows (the built-in table, catalogue rows) keyed by formula, condensed-phase tag and charge.
  * Radical marks are ignored, `(g)` is the untagged entry, ground-state tags map to the untagged
  * entry and known excited states add their excitation energy to it. Other tags must be in the table.
  * @throws Error when two records share a key, naming it.
  */
-export function createEnthalpyLookup(records: readonly EnthalpyRecord[]): EnthalpyLookup {
-  const index = new Map<string, EnthalpyRecord>();
+export function createEnthalpyLookup(records: readonly EnthalpyEntry[]): EnthalpyLookup {
+  const index = new Map<string, EnthalpyEntry>();
   for (const record of records) {
     const parts = parseThermoKey(record.key);
     if (!parts) throw new Error(`enthalpy table: "${record.key}" is not a species key`);
@@ -24,31 +21,35 @@ export function createEnthalpyLookup(records: readonly EnthalpyRecord[]): Enthal
   return (speciesKey) => findEntry(index, speciesKey);
 }
 
-function findEntry(index: Map<string, EnthalpyRecord>, speciesKey: string): EnthalpyEntry | null {
+function findEntry(index: Map<string, EnthalpyEntry>, speciesKey: string): EnthalpyEntry | null {
   const parts = parseThermoKey(speciesKey.trim());
   if (!parts) return null;
   const direct = index.get(tableKey(parts));
-  if (direct) return { ...direct, key: speciesKey };
+  if (direct) return toEntry(direct, speciesKey, direct.source);
   if (parts.tag === null) return null;
   const base = index.get(tableKey({ ...parts, tag: null }));
   return base ? applyStateTag(base, parts, speciesKey) : null;
 }
 
-function applyStateTag(base: EnthalpyRecord, parts: ThermoKeyParts, speciesKey: string): EnthalpyEntry | null {
+function applyStateTag(base: EnthalpyEntry, parts: ThermoKeyParts, speciesKey: string): EnthalpyEntry | null {
   const tag = parts.tag as string;
   if (GROUND_STATE_TAGS[parts.formula]?.includes(tag)) {
-    return { ...base, key: speciesKey, source: `${base.source}; (${tag}) is the ground state` };
+    return toEntry(base, speciesKey, `${base.source}; (${tag}) is the ground state`);
   }
   const excited = EXCITED_STATES[parts.formula]?.find((state) => state.tags.includes(tag));
   if (!excited) return null;
   const excitation = excited.wavenumber * KJ_PER_MOL_PER_WAVENUMBER;
   return {
     key: speciesKey,
-    dfH: roundNoise(base.dfH + excitation),
+    dfH: Math.round((base.dfH + excitation) * 1000) / 1000,
     uncertainty: base.uncertainty,
     source: `${base.source}; + ${excitation.toFixed(2)} kJ/mol excitation of (${tag}), ` +
       `${excited.wavenumber} cm⁻¹ (${excited.source})`,
   };
+}
+
+function toEntry(record: EnthalpyEntry, key: string, source: string): EnthalpyEntry {
+  return { key, dfH: record.dfH, uncertainty: record.uncertainty, source };
 }
 
 /** Removes floating-point noise from sums of tabulated values (values carry at most 3 decimals). */

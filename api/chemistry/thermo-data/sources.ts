@@ -11,3 +11,8 @@ export const JPL = `NASA/JPL Evaluation No. 19-5 (Burkholder et al. 2019), ${FRO
 export const NBS = `NBS Tables of Chemical Thermodynamic Properties (Wagman et al. 1982), ${FROM_MEMORY}`;
 export const PEDLEY = `Pedley, Naylor & Kirby, Thermochemical Data of Organic Compounds, 2nd ed. (1986), ${FROM_MEMORY}`;
 export const ELEMENT_REFERENCE = 'reference state of the element: 0 by definition';
+
+/** A source whose value was recalled only to a few kJ/mol: its uncertainty is widened to cover that. */
+export function roughly(source: string): string {
+  return `${source}; recalled only roughly, uncertainty widened to cover the recall`;
+}

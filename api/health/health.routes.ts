@@ -5,7 +5,7 @@ import { isDatabaseUp } from '../db';
 /** 200 when PostgreSQL answers, 503 while it does not; the pool reconnects by itself when it returns. */
 export function healthRoutes(db: Knex): Router {
   const router = Router();
-  router.get('/health', async (_req, res) => {
+  router.get('/', async (_req, res) => {
     const up = await isDatabaseUp(db);
     res.status(up ? 200 : 503).json({ status: up ? 'ok' : 'degraded', database: up ? 'up' : 'down' });
   });

@@ -2,7 +2,6 @@ import type { StoredUser } from '../users/users.queries';
 
 declare global {
   // passport puts the deserialised account here.
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     // eslint-disable-next-line @typescript-eslint/no-empty-object-type
     interface User extends StoredUser {}

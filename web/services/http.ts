@@ -1,0 +1,96 @@
+import type { ApiErrorBody } from './types';
+
+/** Any failed API call: the server's `{ error: { code, message, details } }`, or a local stand-in. */
+export class ApiError extends Error {
+  override readonly name = 'ApiError';
+
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+}
+
+/** What the client needs from the rest of the app; wired once at start-up (plugins/http.ts). */
+export interface HttpHooks {
+  csrfToken: () => string;
+  onUnauthorized: (error: ApiError) => void;
+}
+
+let hooks: HttpHooks = { csrfToken: () => '', onUnauthorized: () => {} };
+
+export function configureHttp(next: Partial<HttpHooks>): void {
+  hooks = { ...hooks, ...next };
+}
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  signal?: AbortSignal;
+  /** False where a 401 is an expected answer (wrong password), not a lost session. */
+  handleUnauthorized?: boolean;
+}
+
+export const NETWORK_ERROR = 'NETWORK_ERROR';
+
+export async function request<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const method = options.method ?? 'GET';
+  const response = await send(path, method, options);
+  if (response.ok) return readSuccess<T>(response);
+  const error = await readError(response);
+  if (error.status === 401 && options.handleUnauthorized !== false) hooks.onUnauthorized(error);
+  throw error;
+}
+
+async function send(path: string, method: string, options: RequestOptions): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET') headers['X-CSRF-Token'] = hooks.csrfToken();
+  try {
+    return await fetch(path, {
+      method,
+      headers,
+      credentials: 'same-origin',
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError(0, NETWORK_ERROR, 'The Cyclewright server could not be reached. Check your connection and try again.');
+  }
+}
+
+async function readSuccess<T>(response: Response): Promise<T> {
+  if (response.status === 204) return undefined as T;
+  const text = await response.text();
+  return (text === '' ? undefined : JSON.parse(text)) as T;
+}
+
+async function readError(response: Response): Promise<ApiError> {
+  const body = await response.json().catch(() => null);
+  if (isErrorBody(body)) {
+    const { code, message, details } = body.error;
+    return new ApiError(response.status, code, message, details);
+  }
+  const reason = response.statusText || 'no reason given';
+  return new ApiError(response.status, `HTTP_${response.status}`, `The server answered ${response.status} (${reason}).`);
+}
+
+function isErrorBody(body: unknown): body is ApiErrorBody {
+  if (typeof body !== 'object' || body === null || !('error' in body)) return false;
+  const error = (body as { error: unknown }).error;
+  return typeof error === 'object' && error !== null && typeof (error as { code?: unknown }).code === 'string';
+}
+
+export const http = {
+  get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) => request<T>(path, options),
+  post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    request<T>(path, { ...options, method: 'POST', body }),
+  put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    request<T>(path, { ...options, method: 'PUT', body }),
+  delete: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    request<T>(path, { ...options, method: 'DELETE' }),
+};

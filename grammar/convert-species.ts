@@ -1,0 +1,122 @@
+import type { Token } from 'moo';
+import type { FormulaPart, ParticleNode, SourceToken, SpeciesNode } from './ast';
+import { diagnostic, PARSER_CODES, type Diagnostic } from './diagnostics';
+import { flatten, type Cons, type RawMark, type RawPart, type RawParticle, type RawSpecies, type TokenRef } from './raw';
+
+/** Where converted nodes come from: the line number, its text and its tokens. */
+export interface LineContext {
+  line: number;
+  text: string;
+  tokens: readonly Token[];
+  diagnostics: Diagnostic[];
+}
+
+/** The token a template reference stands for on this line. */
+export function tokenOf(ref: TokenRef, context: LineContext): Token {
+  return context.tokens[(ref as unknown as { token: number }).token];
+}
+
+export function sourceToken(ref: TokenRef, context: LineContext): SourceToken {
+  const token = tokenOf(ref, context);
+  return { text: token.text, line: context.line, column: token.col };
+}
+
+function tokenEnd(ref: TokenRef, context: LineContext): number {
+  const token = tokenOf(ref, context);
+  return token.offset + token.text.length;
+}
+
+function convertParts(list: Cons<RawPart>, context: LineContext): FormulaPart[] {
+  return flatten(list).map((part): FormulaPart => {
+    if (part.kind === 'word') {
+      const token = tokenOf(part.token, context);
+      return { kind: 'word', text: token.text, column: token.col };
+    }
+    return {
+      kind: 'group',
+      bracket: tokenOf(part.open, context).text === '[' ? '[' : '(',
+      parts: convertParts(part.formula, context),
+      count: part.count ? sourceToken(part.count, context) : null,
+      column: tokenOf(part.open, context).col,
+    };
+  });
+}
+
+function partEnd(part: RawPart, context: LineContext): number {
+  if (part.kind === 'word') return tokenEnd(part.token, context);
+  return tokenEnd(part.count ?? part.close, context);
+}
+
+function markEnd(mark: RawMark, context: LineContext): number {
+  return tokenEnd(mark.kind === 'adsorbed' && mark.count ? mark.count : mark.token, context);
+}
+
+function partStart(part: RawPart, context: LineContext): number {
+  return tokenOf(part.kind === 'word' ? part.token : part.open, context).offset;
+}
+
+function markError(context: LineContext, token: Token, message: string): void {
+  const position = { line: context.line, column: token.col };
+  context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, position, message, { found: token.text }));
+}
+
+/** Reads the marks; a second charge or a second adsorbed mark is a syntax error. */
+function readMarks(marks: RawMark[], context: LineContext) {
+  let radicalMarks = 0;
+  let charge: SourceToken | null = null;
+  let sites = 0;
+  for (const mark of marks) {
+    const token = tokenOf(mark.token, context);
+    if (mark.kind === 'radical') radicalMarks += 1;
+    else if (mark.kind === 'charge') {
+      if (charge) markError(context, token, 'a species has one charge; this one is written twice');
+      charge = sourceToken(mark.token, context);
+    } else {
+      if (sites > 0) markError(context, token, 'the adsorbed mark is written twice; write *2 for two sites');
+      sites = mark.count ? Number(tokenOf(mark.count, context).text) : 1;
+    }
+  }
+  return { radicalMarks, charge, sites };
+}
+
+function speciesEnd(parts: RawPart[], states: TokenRef[], marks: RawMark[], context: LineContext): number {
+  if (marks.length > 0) return markEnd(marks[marks.length - 1], context);
+  if (states.length > 0) return tokenEnd(states[states.length - 1], context);
+  return partEnd(parts[parts.length - 1], context);
+}
+
+function reportBlank(text: string, start: number, context: LineContext): void {
+  const blank = text.search(/\s/);
+  if (blank < 0) return;
+  const position = { line: context.line, column: start + blank + 1 };
+  const message = `a species is written without blanks: "${text}"`;
+  context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, position, message, { found: text, expected: [text.replace(/\s+/g, '')] }));
+}
+
+/** Turns a parsed species into its AST node; reports blanks inside it. */
+export function convertSpecies(raw: RawSpecies, context: LineContext): SpeciesNode {
+  const parts = flatten(raw.formula);
+  const states = flatten(raw.states);
+  const marks = flatten(raw.marks);
+  const start = partStart(parts[0], context);
+  const end = speciesEnd(parts, states, marks, context);
+  const text = context.text.slice(start, end);
+  reportBlank(text, start, context);
+  return {
+    kind: 'species',
+    text,
+    formulaText: context.text.slice(start, partEnd(parts[parts.length - 1], context)),
+    formula: convertParts(raw.formula, context),
+    states: states.map((ref) => tokenOf(ref, context).text),
+    ...readMarks(marks, context),
+    line: context.line,
+    column: start + 1,
+  };
+}
+
+/** Turns a parsed particle (species or reserved word) into its AST node. */
+export function convertParticle(raw: RawParticle, context: LineContext): ParticleNode {
+  if (raw.kind === 'species') return convertSpecies(raw, context);
+  const token = tokenOf(raw.token, context);
+  return { kind: raw.kind, text: token.text, line: context.line, column: token.col };
+}

@@ -1,0 +1,92 @@
+import type { Parser } from 'nearley';
+import { diagnostic, PARSER_CODES, type Diagnostic } from './diagnostics';
+
+/** nearley's parse table is not in its typings; this is the part read here. */
+interface ParseTable {
+  table: { states: { rule: { symbols: unknown[] }; dot: number }[] }[];
+}
+
+const TOKEN_NAMES: Record<string, string> = {
+  label: 'a label',
+  colon: "':'",
+  arrow: 'an arrow (->, →, <=>, ⇌)',
+  at: "'@'",
+  photon: 'hν',
+  electron: 'e^-',
+  stateTag: 'a state tag such as (3P)',
+  lparen: "'('",
+  rparen: "')'",
+  lbracket: "'['",
+  rbracket: "']'",
+  number: 'a number',
+  word: 'a formula or declared name',
+  thirdBody: 'M',
+  radical: 'a radical mark (• or .)',
+  charge: 'a charge such as ^+ or ^2-',
+  star: "'*'",
+  plus: "'+'",
+  comma: "','",
+  equals: "'='",
+  rateText: 'a rate expression',
+  bar: "'|'",
+  text: 'a title',
+  value: 'a value',
+};
+
+/** Token kinds the parser could have accepted at table column `index`, in plain words. */
+export function expectedAt(parser: Parser, index: number): string[] {
+  const column = (parser as unknown as ParseTable).table[index];
+  const names = new Set<string>();
+  for (const state of column?.states ?? []) {
+    const symbol = state.rule.symbols[state.dot] as { type?: string } | undefined;
+    if (symbol && typeof symbol === 'object' && symbol.type) names.add(TOKEN_NAMES[symbol.type] ?? symbol.type);
+  }
+  return [...names];
+}
+
+const PAIRS: Record<string, string> = { ')': '(', ']': '[' };
+
+/** The first bracket without a partner before any `@` or `#`, if there is one. */
+export function unbalancedBracket(line: string, lineNumber: number): Diagnostic | null {
+  const open: { char: string; index: number }[] = [];
+  for (let index = 0; index < line.length; index += 1) {
+    const char = line[index];
+    if (char === '@' || char === '#') break;
+    if (char === '(' || char === '[') open.push({ char, index });
+    else if (char === ')' || char === ']') {
+      const last = open.pop();
+      if (!last || last.char !== PAIRS[char]) return bracketDiagnostic(lineNumber, index, char, last ? closerOf(last.char) : null);
+    }
+  }
+  const left = open.pop();
+  return left ? bracketDiagnostic(lineNumber, left.index, left.char, null) : null;
+}
+
+function closerOf(opener: string): string {
+  return opener === '(' ? ')' : ']';
+}
+
+function bracketDiagnostic(line: number, index: number, found: string, expected: string | null): Diagnostic {
+  const opening = found === '(' || found === '[';
+  const message = opening
+    ? `'${found}' is never closed`
+    : expected
+      ? `'${found}' closes nothing here; expected '${expected}'`
+      : `'${found}' has no opening bracket`;
+  const expectedList = opening ? [`'${closerOf(found)}'`] : expected ? [`'${expected}'`] : [];
+  return diagnostic('error', PARSER_CODES.unbalancedBrackets, { line, column: index + 1 }, message, { found, expected: expectedList });
+}
+
+/** A syntax error at a token (or at the end of the line when `token` is null). */
+export function syntaxDiagnostic(
+  line: number,
+  token: { text: string; col: number; type?: string } | null,
+  lineText: string,
+  expected: string[],
+): Diagnostic {
+  const found = token ? (token.type === 'invalid' ? token.text[0] : token.text) : 'end of line';
+  const column = token ? token.col : lineText.trimEnd().length + 1;
+  const what = token?.type === 'invalid' ? `unexpected character '${found}'` : token ? `unexpected '${found}'` : 'the line ends too early';
+  const message = expected.length > 0 ? `${what}; expected ${expected.join(', ')}` : what;
+  return diagnostic('error', PARSER_CODES.syntaxError, { line, column }, message, { found, expected });
+}

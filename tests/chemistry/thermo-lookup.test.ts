@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { builtinEnthalpy, chainLookups, createEnthalpyLookup, type EnthalpyLookup } from '@api/chemistry/thermo';
+
+const dfH = (key: string) => builtinEnthalpy(key)?.dfH ?? null;
+
+describe('builtinEnthalpy key normalisation (step-notation.md species keys)', () => {
+  it('ignores radical marks, Unicode or ASCII', () => {
+    expect(dfH('NO•')).toBe(dfH('NO'));
+    expect(dfH('NO.')).toBe(dfH('NO'));
+    expect(dfH('Br•')).toBe(dfH('Br'));
+  });
+
+  it('reads (g) as the gas entry and keeps condensed phases apart', () => {
+    expect(dfH('Br2(g)')).toBe(30.91);
+    expect(dfH('Br2(l)')).toBe(0);
+    expect(dfH('H2O2(aq)')).not.toBe(dfH('H2O2'));
+  });
+
+  it('maps ground-state tags to the atom and says so in the source', () => {
+    expect(dfH('O(3P)')).toBe(dfH('O'));
+    expect(dfH('Cl(2P3/2)')).toBe(dfH('Cl'));
+    expect(builtinEnthalpy('O(3P)')?.source).toContain('(3P) is the ground state');
+    expect(builtinEnthalpy('O(3P)')?.key).toBe('O(3P)');
+  });
+
+  // O(¹D₂) at 15 867.862 cm⁻¹ (NIST ASD, from memory) = 189.82 kJ/mol;
+  // O2 a¹Δg T0 = 7 882.39 cm⁻¹ (Huber & Herzberg 1979, from memory) = 94.29 kJ/mol.
+  it('adds the excitation energy of known excited states', () => {
+    expect((dfH('O(1D)') ?? NaN) - (dfH('O') ?? NaN)).toBeCloseTo(189.82, 2);
+    expect(dfH('O2(a1Δg)')).toBeCloseTo(94.29, 2);
+    expect(builtinEnthalpy('O(1D)')?.source).toContain('15867.862 cm⁻¹');
+  });
+
+  it('accepts the charge before or after the phase tag', () => {
+    expect(dfH('Cl^-(aq)')).toBe(-167.08);
+    expect(dfH('Cl(aq)^-')).toBe(-167.08);
+    expect(dfH('Fe^3+(aq)')).toBe(dfH('Fe(aq)^3+'));
+  });
+
+  it.each([
+    ['C2H4O', 'an isomer written differently from CH3CHO'],
+    ['Cl^-', 'a gas-phase ion that is not tabulated'],
+    ['CO*', 'an adsorbed species'],
+    ['*', 'an empty site'],
+    ['e^-', 'an electron'],
+    ['O(v)', 'vibrational excitation of unknown energy'],
+    ['O(5S)', 'an electronic state that is not tabulated'],
+    ['Enz', 'a declared name'],
+    ['Xy2', 'an unknown symbol'],
+    ['', 'an empty key'],
+  ])('does not know %s (%s)', (key) => {
+    expect(builtinEnthalpy(key)).toBeNull();
+  });
+});
+
+describe('createEnthalpyLookup', () => {
+  const row = { dfH: 1, uncertainty: null, source: 'test row' };
+
+  it('rejects two rows that are the same species, and malformed keys', () => {
+    expect(() => createEnthalpyLookup([{ key: 'Br', ...row }, { key: 'Br•', ...row }])).toThrow('"Br•" is listed twice (as Br)');
+    expect(() => createEnthalpyLookup([{ key: 'hν', ...row }])).toThrow('"hν" is not a species key');
+  });
+});
+
+describe('chainLookups', () => {
+  const catalogue: EnthalpyLookup = createEnthalpyLookup([{ key: 'BrO', dfH: 124.0, uncertainty: 1, source: 'catalogue' }]);
+
+  it('takes the first lookup that knows a species and falls through otherwise', () => {
+    const chained = chainLookups(catalogue, builtinEnthalpy);
+    expect(chained('BrO•')).toMatchObject({ key: 'BrO•', dfH: 124.0, source: 'catalogue' });
+    expect(chained('O3')?.dfH).toBe(142.674);
+    expect(chained('C2H4O')).toBeNull();
+    expect(chainLookups()('O3')).toBeNull();
+  });
+});

@@ -1,8 +1,8 @@
 /** The parts of a species key that matter for enthalpy lookup (radical marks are dropped). */
 export interface ThermoKeyParts {
   formula: string;
-  /** State tag without parentheses (`1D`, `aq`, `l`), or null. `(g)` is reported as null. */
-  tag: string | null;
+  /** State tags without parentheses (`1D`, `aq`, `l`) in written order; `(g)` is dropped (gas is the default). */
+  tags: string[];
   /** Charge as written after `^` (`-`, `2+`), or ''. */
   charge: string;
   /** Site mark as written (`*`, `*2`), or ''. */
@@ -22,30 +22,28 @@ const SUFFIX_TOKEN = /\(([^()]+)\)|([•.])|\^(\d*[+-])|\*(\d*)/y;
 export function parseThermoKey(key: string): ThermoKeyParts | null {
   const formula = FORMULA.exec(key)?.[0];
   if (!formula || !balancedBrackets(formula)) return null;
-  const parts: ThermoKeyParts = { formula, tag: null, charge: '', sites: '' };
+  const parts: ThermoKeyParts = { formula, tags: [], charge: '', sites: '' };
   SUFFIX_TOKEN.lastIndex = formula.length;
   while (SUFFIX_TOKEN.lastIndex < key.length) {
     const match = SUFFIX_TOKEN.exec(key);
     if (!match) return null;
     const [, tag, , charge, sites] = match;
     if (tag !== undefined) {
-      if (parts.tag !== null) return null;
-      parts.tag = tag;
+      if (tag !== 'g') parts.tags.push(tag);
     } else if (charge !== undefined) {
       parts.charge = charge;
     } else if (sites !== undefined) {
       parts.sites = `*${sites}`;
     }
   }
-  if (parts.tag === 'g') parts.tag = null;
   return parts;
 }
 
-/** The table key for parts: formula, tag, charge, sites (the canonical order without radical marks). */
+/** The table key for parts: formula, tags, charge, sites (the canonical order without radical marks). */
 export function tableKey(parts: ThermoKeyParts): string {
-  const tag = parts.tag === null ? '' : `(${parts.tag})`;
+  const tags = parts.tags.map((tag) => `(${tag})`).join('');
   const charge = parts.charge === '' ? '' : `^${parts.charge}`;
-  return `${parts.formula}${tag}${charge}${parts.sites}`;
+  return `${parts.formula}${tags}${charge}${parts.sites}`;
 }
 
 function balancedBrackets(formula: string): boolean {

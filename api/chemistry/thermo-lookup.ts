@@ -1,5 +1,5 @@
 import { KJ_PER_MOL_PER_WAVENUMBER } from './constants';
-import { parseThermoKey, tableKey, type ThermoKeyParts } from './thermo-key';
+import { parseThermoKey, tableKey } from './thermo-key';
 import { EXCITED_STATES, GROUND_STATE_TAGS } from './thermo-data/electronic-states';
 import type { EnthalpyEntry, EnthalpyLookup } from './thermo';
 
@@ -26,17 +26,16 @@ function findEntry(index: Map<string, EnthalpyEntry>, speciesKey: string): Entha
   if (!parts) return null;
   const direct = index.get(tableKey(parts));
   if (direct) return toEntry(direct, speciesKey, direct.source);
-  if (parts.tag === null) return null;
-  const base = index.get(tableKey({ ...parts, tag: null }));
-  return base ? applyStateTag(base, parts, speciesKey) : null;
+  if (parts.tags.length !== 1) return null;
+  const base = index.get(tableKey({ ...parts, tags: [] }));
+  return base ? applyStateTag(base, parts.formula, parts.tags[0], speciesKey) : null;
 }
 
-function applyStateTag(base: EnthalpyEntry, parts: ThermoKeyParts, speciesKey: string): EnthalpyEntry | null {
-  const tag = parts.tag as string;
-  if (GROUND_STATE_TAGS[parts.formula]?.includes(tag)) {
+function applyStateTag(base: EnthalpyEntry, formula: string, tag: string, speciesKey: string): EnthalpyEntry | null {
+  if (GROUND_STATE_TAGS[formula]?.includes(tag)) {
     return toEntry(base, speciesKey, `${base.source}; (${tag}) is the ground state`);
   }
-  const excited = EXCITED_STATES[parts.formula]?.find((state) => state.tags.includes(tag));
+  const excited = EXCITED_STATES[formula]?.find((state) => state.tags.includes(tag));
   if (!excited) return null;
   const excitation = excited.wavenumber * KJ_PER_MOL_PER_WAVENUMBER;
   return {

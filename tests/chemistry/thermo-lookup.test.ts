@@ -29,6 +29,7 @@ describe('builtinEnthalpy key normalisation (step-notation.md species keys)', ()
     expect((dfH('O(1D)') ?? NaN) - (dfH('O') ?? NaN)).toBeCloseTo(189.82, 2);
     expect(dfH('O2(a1Δg)')).toBeCloseTo(94.29, 2);
     expect(builtinEnthalpy('O(1D)')?.source).toContain('15867.862 cm⁻¹');
+    expect(dfH('O(1D)(g)')).toBe(dfH('O(1D)'));
   });
 
   it('accepts the charge before or after the phase tag', () => {
@@ -48,6 +49,7 @@ describe('builtinEnthalpy key normalisation (step-notation.md species keys)', ()
     ['Enz', 'a declared name'],
     ['Xy2', 'an unknown symbol'],
     ['', 'an empty key'],
+    ['O(1D)(aq)', 'two state tags that no entry has'],
   ])('does not know %s (%s)', (key) => {
     expect(builtinEnthalpy(key)).toBeNull();
   });

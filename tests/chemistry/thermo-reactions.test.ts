@@ -50,6 +50,21 @@ describe('reaction enthalpies by Hess’s law', () => {
   );
 });
 
+describe('reaction enthalpies against measured equilibria (looked up)', () => {
+  // Klobas & Wilmouth, ACP 19 (2019) 6205: Keq(2 ClO ⇌ ClOOCl) = 2.16e-27 exp(8527 K / T) cm³ molecule⁻¹.
+  // The van't Hoff slope gives ΔU = −R·8527 K; with Δn = −1, ΔH = ΔU − RT at 298.15 K.
+  it('2 ClO → ClOOCl agrees with the van’t Hoff slope of the measured equilibrium constant', () => {
+    const R = 8.314462618e-3;
+    const fromSlope = -R * 8527 - R * 298.15;
+    expect(Math.abs(dH([[2, 'ClO']], [[1, 'Cl2O2']]) - fromSlope)).toBeLessThanOrEqual(1.5);
+  });
+
+  // Orlando & Tyndall, J. Phys. Chem. 100 (1996) 19398: BrONO2 → BrO + NO2, 28.2 ± 1.5 kcal/mol at 298 K.
+  it('BrONO2 → BrO + NO2 agrees with the measured dissociation enthalpy within its uncertainty', () => {
+    expect(Math.abs(dH([[1, 'BrONO2']], [[1, 'BrO'], [1, 'NO2']]) - 28.2 * 4.184)).toBeLessThanOrEqual(1.5 * 4.184);
+  });
+});
+
 describe('reactionEnthalpy rules', () => {
   it('skips the photon and the third body', () => {
     const result = reactionEnthalpy(

@@ -1,8 +1,8 @@
 import type { ThermoRecord } from './types';
-import { ATCT, CODATA_KEY, ELEMENT_REFERENCE, JANAF, NBS } from './sources';
+import { ATCT, CODATA_KEY, ELEMENT_REFERENCE, JANAF, lookedUp, NBS } from './sources';
 
-// Looked up: ΔfH°298 = 2.96 ± 0.10 kcal/mol (×4.184 = 12.38 ± 0.42 kJ/mol).
-const HO2_BENCHMARK = 'Flowers et al., J. Phys. Chem. A 108 (2004) 3195, benchmark computation';
+// ΔfH°298 = 2.96 ± 0.10 kcal/mol (×4.184 = 12.38 ± 0.42 kJ/mol).
+const HO2_BENCHMARK = lookedUp('Flowers et al., J. Phys. Chem. A 108 (2004) 3195, benchmark computation');
 
 /** Oxygen and hydrogen species, gas phase unless tagged. */
 export const OXYGEN_HYDROGEN: readonly ThermoRecord[] = [

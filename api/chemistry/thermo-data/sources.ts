@@ -1,6 +1,6 @@
 /**
- * Published tables the built-in values come from. Every value in this folder was written from
- * memory of these tables (no copy was at hand while writing); each source string says so.
+ * Published tables the built-in values come from. Most values were written from memory of these
+ * tables and their source strings say so; the few that were looked up say "looked up".
  */
 const FROM_MEMORY = 'from memory';
 
@@ -10,9 +10,16 @@ export const ATCT = `Active Thermochemical Tables (ATcT, Ruscic et al.; version 
 export const JPL = `NASA/JPL Evaluation No. 19-5 (Burkholder et al. 2019), ${FROM_MEMORY}`;
 export const NBS = `NBS Tables of Chemical Thermodynamic Properties (Wagman et al. 1982), ${FROM_MEMORY}`;
 export const PEDLEY = `Pedley, Naylor & Kirby, Thermochemical Data of Organic Compounds, 2nd ed. (1986), ${FROM_MEMORY}`;
+export const WEBBOOK_JANAF = 'NIST-JANAF Thermochemical Tables (Chase 1998) as listed in the NIST Chemistry WebBook, looked up';
+export const CCCBDB = 'NIST CCCBDB Release 22 (2022), experimental ΔfH(298.15 K), looked up';
 export const ELEMENT_REFERENCE = 'reference state of the element: 0 by definition';
 
 /** A source whose value was recalled only to a few kJ/mol: its uncertainty is widened to cover that. */
 export function roughly(source: string): string {
   return `${source}; recalled only roughly, uncertainty widened to cover the recall`;
+}
+
+/** A value looked up in a paper, with the figure as printed when it was not in kJ/mol. */
+export function lookedUp(citation: string): string {
+  return `${citation}, looked up`;
 }

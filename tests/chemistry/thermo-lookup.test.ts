@@ -32,6 +32,13 @@ describe('builtinEnthalpy key normalisation (step-notation.md species keys)', ()
     expect(dfH('O(1D)(g)')).toBe(dfH('O(1D)'));
   });
 
+  // Common practice: the red auroral line of atomic oxygen, ¹D₂ → ³P₂, lies at 630.0 nm in air
+  // (630.2 nm in vacuum); its photon energy N_A·h·c/λ is the ¹D excitation energy.
+  it('gives O(1D) the energy of the 630 nm red line above O(3P)', () => {
+    const excitation = (dfH('O(1D)') ?? NaN) - (dfH('O(3P)') ?? NaN);
+    expect(excitation).toBeCloseTo(119626.57 / 630.2, 1);
+  });
+
   it('accepts the charge before or after the phase tag', () => {
     expect(dfH('Cl^-(aq)')).toBe(-167.08);
     expect(dfH('Cl(aq)^-')).toBe(-167.08);

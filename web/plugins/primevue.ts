@@ -3,6 +3,7 @@ import PrimeVue from 'primevue/config';
 import ToastService from 'primevue/toastservice';
 import Aura from '@primeuix/themes/aura';
 import { definePreset } from '@primeuix/themes';
+import { feedbackComponents } from './feedback-tokens';
 import { ember, graphite, ink, lagoon } from './palette';
 
 /**
@@ -24,6 +25,7 @@ export const CyclewrightPreset = definePreset(Aura, {
       },
     },
   },
+  components: feedbackComponents,
   extend: {
     catalyst: { color: '{ember.800}', background: '{ember.100}', border: '{ember.500}' },
     intermediate: { color: '{lagoon.800}', background: '{lagoon.100}', border: '{lagoon.500}' },

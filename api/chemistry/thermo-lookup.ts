@@ -4,29 +4,40 @@ import { EXCITED_STATES, GROUND_STATE_TAGS } from './thermo-data/electronic-stat
 import type { EnthalpyEntry, EnthalpyLookup } from './thermo';
 
 /**
- * Builds a lookup over enthalpy rows (the built-in table, catalogue rows) keyed by formula, condensed-phase tag and charge.
- * Radical marks are ignored, `(g)` is the untagged entry, ground-state tags map to the untagged
+ * Builds a lookup over enthalpy rows (the built-in table, catalogue rows) keyed by formula,
+ * condensed-phase tag and charge; `*` and `e^-` rows are kept as written. Radical marks are ignored, `(g)` is the untagged entry, ground-state tags map to the untagged
  * entry and known excited states add their excitation energy to it. Other tags must be in the table.
- * @throws Error when two records share a key, naming it.
+ * @throws Error naming the key when two records are the same species or a key is not a species.
  */
 export function createEnthalpyLookup(records: readonly EnthalpyEntry[]): EnthalpyLookup {
   const index = new Map<string, EnthalpyEntry>();
   for (const record of records) {
-    const parts = parseThermoKey(record.key);
-    if (!parts) throw new Error(`enthalpy table: "${record.key}" is not a species key`);
-    const key = tableKey(parts);
+    const key = indexKey(record.key);
+    if (key === null) throw new Error(`enthalpy table: "${record.key}" is not a species key`);
     if (index.has(key)) throw new Error(`enthalpy table: "${record.key}" is listed twice (as ${key})`);
     index.set(key, record);
   }
   return (speciesKey) => findEntry(index, speciesKey);
 }
 
+// The empty site and the electron have no formula; a table may still give them a value
+// (e.g. a convention for electrode steps), so they are indexed as written.
+const FORMULA_LESS = new Set(['*', 'e^-']);
+
+function indexKey(key: string): string | null {
+  const trimmed = key.trim();
+  if (FORMULA_LESS.has(trimmed)) return trimmed;
+  const parts = parseThermoKey(trimmed);
+  return parts ? tableKey(parts) : null;
+}
+
 function findEntry(index: Map<string, EnthalpyEntry>, speciesKey: string): EnthalpyEntry | null {
-  const parts = parseThermoKey(speciesKey.trim());
-  if (!parts) return null;
-  const direct = index.get(tableKey(parts));
+  const key = indexKey(speciesKey);
+  if (key === null) return null;
+  const direct = index.get(key);
   if (direct) return toEntry(direct, speciesKey, direct.source);
-  if (parts.tags.length !== 1) return null;
+  const parts = parseThermoKey(speciesKey.trim());
+  if (!parts || parts.tags.length !== 1) return null;
   const base = index.get(tableKey({ ...parts, tags: [] }));
   return base ? applyStateTag(base, parts.formula, parts.tags[0], speciesKey) : null;
 }

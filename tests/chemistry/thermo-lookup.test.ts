@@ -69,6 +69,12 @@ describe('createEnthalpyLookup', () => {
     expect(() => createEnthalpyLookup([{ key: 'Br', ...row }, { key: 'Br•', ...row }])).toThrow('"Br•" is listed twice (as Br)');
     expect(() => createEnthalpyLookup([{ key: 'hν', ...row }])).toThrow('"hν" is not a species key');
   });
+
+  it('knows the empty site and the electron only when a row gives them a value', () => {
+    const lookup = createEnthalpyLookup([{ key: 'e^-', ...row }]);
+    expect(lookup('e^-')).toMatchObject({ key: 'e^-', dfH: 1 });
+    expect(lookup('*')).toBeNull();
+  });
 });
 
 describe('chainLookups', () => {

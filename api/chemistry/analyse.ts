@@ -1,0 +1,107 @@
+import { parseMechanism } from '@grammar/parse';
+import type { Diagnostic } from '@grammar/diagnostics';
+import type { MechanismAnalysis, SpeciesJson, SpeciesRole, StepJson } from './analysis-types';
+import { finding } from './diagnostic-codes';
+import { reportDuplicates } from './duplicates';
+import { cachedLookup } from './enthalpy';
+import { formedAndConsumedSpecies } from './intermediates';
+import { readDirectives, type MechanismSettings } from './directives';
+import { reportRadicalMarks } from './radical-marks';
+import { analyseRoutes, type RouteAnalysis } from './route-report';
+import { assignRoles } from './roles';
+import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
+import { buildStep, type StepModel } from './step-model';
+import { reportStep } from './step-report';
+import { buildStoichiometry, type Stoichiometry } from './stoichiometry';
+import { builtinEnthalpy, type EnthalpyLookup } from './thermo';
+import { resolveDirectiveSpecies } from './directive-species';
+import { sortDiagnostics } from './diagnostic-order';
+
+export type { MechanismAnalysis } from './analysis-types';
+
+/** Above this many steps routes are not computed (a diagnostic says so). */
+export const MAX_ROUTE_ANALYSIS_STEPS = 1_500;
+/** Direct routes are listed for mechanisms of at most this many steps, unless told otherwise. */
+export const DEFAULT_MAX_ROUTE_STEPS = 40;
+
+export interface AnalyseOptions {
+  enthalpy?: EnthalpyLookup;
+  maxRouteSteps?: number;
+}
+
+function buildSteps(nodes: ReturnType<typeof parseMechanism>['steps'], registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepModel[] {
+  const steps: StepModel[] = [];
+  nodes.forEach((node, position) => {
+    const step = buildStep(node, position + 1, registry, diagnostics);
+    if (step) steps.push({ ...step, index: steps.length });
+  });
+  return steps;
+}
+
+function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: EnthalpyLookup): SpeciesJson {
+  const entry = item.kind === 'species' ? lookup(item.key) : null;
+  const { key, formula, name, kind, elements, charge, sites, electrons, radical, reactive, declared, opaque, firstLine } = item;
+  return { key, formula, name, kind, elements, charge, sites, electrons, radical, reactive, declared, opaque, role, dfH: entry?.dfH ?? null, dfHSource: entry?.source ?? null, firstLine };
+}
+
+function reportMissingEnthalpies(steps: readonly StepJson[], diagnostics: Diagnostic[]): void {
+  const missing = new Map<string, StepJson>();
+  for (const step of steps) for (const key of step.missingEnthalpies) if (!missing.has(key)) missing.set(key, step);
+  if (missing.size === 0) return;
+  const [firstKey, firstStep] = [...missing][0];
+  const names = [...missing.keys()];
+  const shown = names.slice(0, 20).join(', ') + (names.length > 20 ? `, and ${names.length - 20} more` : '');
+  diagnostics.push(finding('enthalpy-missing', firstStep, `no enthalpy of formation for ${shown}; ΔH of the steps with them is left empty`, { found: firstKey }));
+}
+
+function routesOrNote(steps: StepModel[], stepJson: StepJson[], stoichiometry: Stoichiometry, species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
+  const context = { steps, stoichiometry, stepDH: stepJson.map((step) => step.dH), lookup, diagnostics };
+  if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) return analyseRoutes(context, species, settings, maxRouteSteps);
+  const intermediates = formedAndConsumedSpecies(stoichiometry, species, settings.terminal).map((s) => s.key);
+  const message = `routes are computed for up to ${MAX_ROUTE_ANALYSIS_STEPS} steps; this mechanism has ${steps.length}`;
+  diagnostics.push(finding('routes-too-large', steps[0].node, message));
+  const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;
+  return { intermediates, explanation, routes: [], overall: null, roles: assignRoles(species, steps, null, new Map()) };
+}
+
+function emptyRoutes(diagnostics: Diagnostic[]): RouteAnalysis {
+  diagnostics.push(finding('no-steps', { line: 1, column: 1 }, 'the text has no well-formed steps to analyse'));
+  return { intermediates: [], explanation: 'There are no steps, so there are no intermediates.', routes: [], overall: null, roles: new Map() };
+}
+
+/**
+ * Checks and analyses a mechanism written in the step notation: parse, species, balance,
+ * radical bookkeeping, step rules, duplicates, intermediates, routes, roles and enthalpies.
+ * Pure: no I/O. Never throws on any text; every problem becomes a diagnostic.
+ */
+export function analyseMechanism(text: string, options: AnalyseOptions = {}): MechanismAnalysis {
+  const lookup = cachedLookup(options.enthalpy ?? builtinEnthalpy);
+  const parsed = parseMechanism(text);
+  const diagnostics = [...parsed.diagnostics];
+  const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
+  const registry = new SpeciesRegistry(settings.declarations, diagnostics);
+  const steps = buildSteps(parsed.steps, registry, diagnostics);
+  const species = registry.all();
+  const stepJson = steps.map((step) => reportStep(step, lookup, species, diagnostics));
+  reportDuplicates(steps, stepJson.map((step) => step.normalised), diagnostics);
+  reportRadicalMarks(species, diagnostics);
+  reportMissingEnthalpies(stepJson, diagnostics);
+  const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
+  const stoichiometry = buildStoichiometry(steps);
+  const routes = steps.length > 0
+    ? routesOrNote(steps, stepJson, stoichiometry, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)
+    : emptyRoutes(diagnostics);
+  return {
+    title: settings.title,
+    units: settings.units,
+    conditions: settings.conditions,
+    steps: stepJson,
+    species: species.map((item) => speciesJson(item, routes.roles.get(item.key) ?? 'unused', lookup)),
+    intermediates: routes.intermediates,
+    intermediatesExplanation: routes.explanation,
+    terminalSpecies: [...declared.terminal],
+    routes: routes.routes,
+    overall: routes.overall,
+    diagnostics: sortDiagnostics(diagnostics),
+  };
+}

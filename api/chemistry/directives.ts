@@ -1,0 +1,90 @@
+import type { Assignment, DirectiveNode, ParticleNode } from '@grammar/ast';
+import type { Diagnostic } from '@grammar/diagnostics';
+import { finding } from './diagnostic-codes';
+import { readDeclarations } from './declarations';
+import type { DeclaredSpecies } from './species-resolve';
+
+/** A species named in %terminal or %intermediates, with where it was named. */
+export interface NamedParticle {
+  node: ParticleNode;
+  line: number;
+  column: number;
+}
+
+/** What the directives of a mechanism set. */
+export interface MechanismSettings {
+  title: string | null;
+  units: { conc: string; time: string };
+  conditions: { T: number | null; P: number | null; M: number | null };
+  terminal: NamedParticle[] | null;
+  intermediates: NamedParticle[] | null;
+  declarations: Map<string, DeclaredSpecies>;
+}
+
+const CONCENTRATION_UNITS = ['molecule cm^-3', 'mol L^-1', 'mol m^-2'];
+const TIME_UNITS = ['s'];
+/** Pressure units to atm (exact by definition: 1 atm = 101 325 Pa = 760 Torr; 1 bar = 10^5 Pa). */
+const PRESSURE_TO_ATM: Record<string, number> = { atm: 1, bar: 100_000 / 101_325, Pa: 1 / 101_325, kPa: 1_000 / 101_325, hPa: 100 / 101_325, Torr: 1 / 760, mbar: 100 / 101_325 };
+const NUMBER = '([-+]?(?:[0-9]+\\.?[0-9]*|\\.[0-9]+)(?:[eE][-+]?[0-9]+)?)';
+
+function badValue(diagnostics: Diagnostic[], assignment: Assignment, message: string): void {
+  diagnostics.push(finding('bad-directive', assignment.value, message, { found: assignment.value.text }));
+}
+
+function readUnits(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): void {
+  for (const assignment of assignments) {
+    const value = assignment.value.text.replace(/\s+/g, ' ');
+    const key = assignment.key.text;
+    const allowed = key === 'conc' ? CONCENTRATION_UNITS : key === 'time' ? TIME_UNITS : null;
+    if (!allowed) diagnostics.push(finding('bad-directive', assignment.key, `%units knows conc and time, not ${key}`, { found: key, expected: ['conc', 'time'] }));
+    else if (!allowed.includes(value)) badValue(diagnostics, assignment, `${key} must be one of: ${allowed.join(', ')}`);
+    else settings.units[key as 'conc' | 'time'] = value;
+  }
+}
+
+function readCondition(assignment: Assignment, diagnostics: Diagnostic[]): number | null {
+  const key = assignment.key.text;
+  const units = key === 'T' ? '(K)?' : key === 'P' ? `(${Object.keys(PRESSURE_TO_ATM).join('|')})?` : '(.*)';
+  const match = new RegExp(`^${NUMBER}\\s*${units}$`).exec(assignment.value.text);
+  const value = match ? Number(match[1]) : NaN;
+  if (!match || !Number.isFinite(value) || value <= 0) {
+    badValue(diagnostics, assignment, `${key} must be a positive number${key === 'T' ? ' in K' : key === 'P' ? ' with a pressure unit (atm, bar, Pa, kPa, hPa, Torr, mbar)' : ''}`);
+    return null;
+  }
+  return key === 'P' ? value * PRESSURE_TO_ATM[match[2] ?? 'atm'] : value;
+}
+
+function readConditions(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): void {
+  for (const assignment of assignments) {
+    const key = assignment.key.text;
+    if (key !== 'T' && key !== 'P' && key !== 'M') {
+      diagnostics.push(finding('bad-directive', assignment.key, `%conditions knows T, P and M, not ${key}`, { found: key, expected: ['T', 'P', 'M'] }));
+      continue;
+    }
+    settings.conditions[key] = readCondition(assignment, diagnostics);
+  }
+}
+
+function named(items: ParticleNode[]): NamedParticle[] {
+  return items.map((node) => ({ node, line: node.line, column: node.column }));
+}
+
+/** Reads the directives in order; a later %title, %terminal or %intermediates replaces an earlier one. */
+export function readDirectives(directives: readonly DirectiveNode[], diagnostics: Diagnostic[]): MechanismSettings {
+  const settings: MechanismSettings = {
+    title: null,
+    units: { conc: CONCENTRATION_UNITS[0], time: 's' },
+    conditions: { T: null, P: null, M: null },
+    terminal: null,
+    intermediates: null,
+    declarations: readDeclarations(directives, diagnostics),
+  };
+  for (const directive of directives) {
+    if (directive.kind === 'title') settings.title = directive.text;
+    else if (directive.kind === 'units') readUnits(directive.assignments, settings, diagnostics);
+    else if (directive.kind === 'conditions') readConditions(directive.assignments, settings, diagnostics);
+    else if (directive.kind === 'terminal') settings.terminal = named(directive.items);
+    else if (directive.kind === 'intermediates') settings.intermediates = named(directive.items);
+  }
+  return settings;
+}

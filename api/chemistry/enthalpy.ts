@@ -1,0 +1,56 @@
+import type { Fraction } from './fraction';
+import type { StepModel } from './step-model';
+import { roundNoise } from './thermo-lookup';
+import { reactionEnthalpy, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
+
+/** A lookup that asks the underlying table once per key. */
+export function cachedLookup(lookup: EnthalpyLookup): EnthalpyLookup {
+  const cache = new Map<string, EnthalpyEntry | null>();
+  return (key) => {
+    let entry = cache.get(key);
+    if (entry === undefined) {
+      entry = lookup(key);
+      cache.set(key, entry);
+    }
+    return entry;
+  };
+}
+
+export interface StepEnthalpy {
+  dH: number | null;
+  missing: string[];
+  used: EnthalpyEntry[];
+  thresholdNm: number | null;
+}
+
+/** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
+export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
+  const terms = [
+    ...step.reactants.map((term) => ({ key: term.species.key, coef: -term.coef.toNumber() })),
+    ...step.products.map((term) => ({ key: term.species.key, coef: term.coef.toNumber() })),
+  ];
+  const { dH, missing, used } = reactionEnthalpy(terms, lookup);
+  const photolysis = step.reactants.some((term) => term.species.kind === 'photon');
+  return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
+}
+
+export interface RouteEnthalpy {
+  /** Σ σ ΔH(step) when every step's ΔH is known, else ΔH of the net reaction. */
+  dH: number | null;
+  fromSteps: number | null;
+  fromNet: number | null;
+}
+
+/** ΔH of a route two ways: from its steps and from its net reaction (they must agree: Hess's law). */
+export function routeEnthalpy(sigma: readonly bigint[], stepDH: readonly (number | null)[], net: ReadonlyMap<string, Fraction>, lookup: EnthalpyLookup): RouteEnthalpy {
+  let fromSteps: number | null = 0;
+  sigma.forEach((value, step) => {
+    if (value === 0n || fromSteps === null) return;
+    const dH = stepDH[step];
+    fromSteps = dH === null ? null : fromSteps + Number(value) * dH;
+  });
+  const terms = [...net].map(([key, coef]) => ({ key, coef: coef.toNumber() }));
+  const fromNet = reactionEnthalpy(terms, lookup).dH;
+  const summed = fromSteps === null ? null : roundNoise(fromSteps);
+  return { dH: summed ?? fromNet, fromSteps: summed, fromNet };
+}

@@ -1,0 +1,106 @@
+import { Fraction, gcd, lcm } from './fraction';
+
+/** A sparse row: column index → non-zero integer. */
+export type SparseRow = Map<number, bigint>;
+
+/** Row echelon form: row i has its pivot in column `pivots[i]`; every other row is 0 there. */
+export interface Echelon {
+  rows: SparseRow[];
+  pivots: number[];
+}
+
+function abs(value: bigint): bigint {
+  return value < 0n ? -value : value;
+}
+
+/** Divides a row by the gcd of its entries so that numbers stay small. */
+function normalise(row: SparseRow): void {
+  let divisor = 0n;
+  for (const value of row.values()) divisor = gcd(divisor, value);
+  if (divisor > 1n) for (const [column, value] of row) row.set(column, value / divisor);
+}
+
+/** Makes `row[column]` zero with an integer combination of `row` and `pivotRow`. */
+function eliminate(row: SparseRow, pivotRow: SparseRow, column: number): void {
+  const a = pivotRow.get(column) as bigint;
+  const b = row.get(column) as bigint;
+  const divisor = gcd(a, b);
+  const rowFactor = a / divisor;
+  const pivotFactor = b / divisor;
+  for (const [key, value] of row) row.set(key, value * rowFactor);
+  for (const [key, value] of pivotRow) {
+    const next = (row.get(key) ?? 0n) - value * pivotFactor;
+    if (next === 0n) row.delete(key);
+    else row.set(key, next);
+  }
+  normalise(row);
+}
+
+/** Picks the sparsest remaining row with a non-zero entry in `column` (keeps fill-in low). */
+function pickPivot(rows: SparseRow[], column: number): number {
+  let best = -1;
+  for (let index = 0; index < rows.length; index += 1) {
+    if (rows[index].has(column) && (best < 0 || rows[index].size < rows[best].size)) best = index;
+  }
+  return best;
+}
+
+/**
+ * Fully reduced echelon form of an integer matrix by fraction-free Gauss–Jordan elimination
+ * (exact: BigInt only). The input rows are copied, not changed.
+ */
+export function reduce(input: readonly SparseRow[], columnCount: number): Echelon {
+  const remaining = input.filter((row) => row.size > 0).map((row) => new Map(row));
+  const rows: SparseRow[] = [];
+  const pivots: number[] = [];
+  for (let column = 0; column < columnCount && remaining.length > 0; column += 1) {
+    const index = pickPivot(remaining, column);
+    if (index < 0) continue;
+    const [pivotRow] = remaining.splice(index, 1);
+    for (const row of remaining) if (row.has(column)) eliminate(row, pivotRow, column);
+    for (const row of rows) if (row.has(column)) eliminate(row, pivotRow, column);
+    for (let r = remaining.length - 1; r >= 0; r -= 1) if (remaining[r].size === 0) remaining.splice(r, 1);
+    rows.push(pivotRow);
+    pivots.push(column);
+  }
+  return { rows, pivots };
+}
+
+/** Scales rational entries to the smallest integers with the same ratios (gcd 1). */
+export function coprimeIntegers(values: readonly Fraction[]): bigint[] {
+  let denominator = 1n;
+  for (const value of values) denominator = lcm(denominator, value.den);
+  const integers = values.map((value) => (value.num * denominator) / value.den);
+  let divisor = 0n;
+  for (const value of integers) divisor = gcd(divisor, value);
+  return divisor > 1n ? integers.map((value) => value / divisor) : integers;
+}
+
+/**
+ * A basis of the null space { x : A x = 0 } of an integer matrix, one coprime integer vector per
+ * free column (that column's entry is positive).
+ */
+export function nullSpace(input: readonly SparseRow[], columnCount: number): bigint[][] {
+  const { rows, pivots } = reduce(input, columnCount);
+  const pivotSet = new Set(pivots);
+  const basis: bigint[][] = [];
+  for (let free = 0; free < columnCount; free += 1) {
+    if (pivotSet.has(free)) continue;
+    const vector = new Array<Fraction>(columnCount).fill(Fraction.ZERO);
+    vector[free] = Fraction.ONE;
+    rows.forEach((row, index) => {
+      const entry = row.get(free);
+      if (entry !== undefined) vector[pivots[index]] = new Fraction(-entry, row.get(pivots[index]) as bigint);
+    });
+    basis.push(coprimeIntegers(vector));
+  }
+  return basis;
+}
+
+/** Rank of an integer matrix. */
+export function rank(input: readonly SparseRow[], columnCount: number): number {
+  return reduce(input, columnCount).pivots.length;
+}
+
+/** |x| for BigInt, exported for callers that orient vectors. */
+export { abs as absBigInt };

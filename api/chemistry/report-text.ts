@@ -1,0 +1,33 @@
+import type { MechanismAnalysis, RouteJson, StepJson } from './analysis-types';
+
+function kj(value: number | null): string {
+  return value === null ? 'ΔH unknown' : `ΔH = ${value.toFixed(1)} kJ/mol`;
+}
+
+function stepLine(step: StepJson): string {
+  const balance = step.balanced ? 'balanced' : 'NOT balanced';
+  const threshold = step.thresholdNm !== null ? `, λ < ${step.thresholdNm.toFixed(0)} nm` : '';
+  return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${step.molecularity}, ${kj(step.dH)}${threshold}`;
+}
+
+function routeLine(route: RouteJson, index: number, overall: number | null): string {
+  const numbers = Object.entries(route.multipliers).map(([id, value]) => `${value}×${id}`).join(' + ');
+  const tags = [route.kind, route.direct ? 'direct' : null, index === overall ? 'overall' : null].filter(Boolean).join(', ');
+  const aside = Object.entries(route.aside).map(([key, value]) => `${value} ${key}`).join(', ');
+  return `  ${index + 1}. ${numbers}\n     net: ${route.net}${aside ? ` (aside: ${aside})` : ''}; ${kj(route.dH)} [${tags}]`;
+}
+
+/** The readable report of `check` (without --json). */
+export function formatReport(analysis: MechanismAnalysis, fileName: string): string {
+  const lines: string[] = [`${analysis.title ?? fileName}`, ''];
+  lines.push(`Steps (${analysis.steps.length}):`, ...analysis.steps.map(stepLine), '');
+  lines.push(`Intermediates: ${analysis.intermediates.join(', ') || 'none'}`, `  ${analysis.intermediatesExplanation}`, '');
+  lines.push(`Routes (${analysis.routes.length}):`, ...analysis.routes.map((route, index) => routeLine(route, index, analysis.overall)), '');
+  const roles = analysis.species.map((species) => `${species.key} ${species.role}`);
+  lines.push(`Roles: ${roles.join('; ')}`, '');
+  const counts = { error: 0, warning: 0, info: 0 };
+  for (const item of analysis.diagnostics) counts[item.severity] += 1;
+  lines.push(`Diagnostics: ${counts.error} errors, ${counts.warning} warnings, ${counts.info} notes`);
+  for (const item of analysis.diagnostics) lines.push(`  ${fileName}:${item.line}:${item.column} ${item.severity} [${item.code}] ${item.message}`);
+  return lines.join('\n');
+}

@@ -1,0 +1,74 @@
+import { directRoutes } from './direct-routes';
+import { Fraction } from './fraction';
+import { nullSpace } from './integer-matrix';
+import { coveringRoute, independentSubset, orient, sameRoute } from './route-vectors';
+import { rowsFor, type Stoichiometry } from './stoichiometry';
+
+/** One route: stoichiometric numbers per step (exact integers). */
+export interface RouteVector {
+  sigma: bigint[];
+  direct: boolean;
+  basis: boolean;
+}
+
+export interface RouteSet {
+  routes: RouteVector[];
+  /** Index of the overall route in `routes`, or null. */
+  overall: number | null;
+  /** null when direct routes were not listed (too many steps); false when the work limit stopped them. */
+  directComplete: boolean | null;
+}
+
+/** Σ σ_s ν_{s,i} per species (zeros dropped), exactly. */
+export function netOfRoute(stoichiometry: Stoichiometry, sigma: readonly bigint[], skip: ReadonlySet<string>): Map<string, Fraction> {
+  const net = new Map<string, Fraction>();
+  for (const [key, row] of stoichiometry.rows) {
+    if (skip.has(key)) continue;
+    let total = Fraction.ZERO;
+    for (const [step, value] of row) if (sigma[step] !== 0n) total = total.add(value.mul(new Fraction(sigma[step])));
+    if (!total.isZero()) net.set(key, total);
+  }
+  return net;
+}
+
+function byPreference(productive: (sigma: bigint[]) => boolean) {
+  const size = (sigma: bigint[]) => sigma.filter((value) => value !== 0n).length;
+  return (a: bigint[], b: bigint[]) => Number(productive(b)) - Number(productive(a)) || size(a) - size(b);
+}
+
+/**
+ * Routes of the mechanism for the chosen intermediates (Horiuti–Temkin): a basis of the null
+ * space of their rows by exact elimination, preferring direct routes as basis vectors when the
+ * mechanism has at most `maxDirectSteps` steps; the other direct routes; the overall route.
+ */
+export function findRoutes(stoichiometry: Stoichiometry, intermediates: readonly string[], maxDirectSteps: number): RouteSet {
+  const { reversible, stepCount } = stoichiometry;
+  const rows = rowsFor(stoichiometry, intermediates);
+  const rawBasis = nullSpace(rows, stepCount).map((sigma) => orient(sigma, reversible));
+  const skip = new Set([...intermediates, ...stoichiometry.aside]);
+  const memo = new Map<bigint[], boolean>();
+  const productive = (sigma: bigint[]) => {
+    if (!memo.has(sigma)) memo.set(sigma, netOfRoute(stoichiometry, sigma, skip).size > 0);
+    return memo.get(sigma) as boolean;
+  };
+  if (stepCount > maxDirectSteps) {
+    const overall = coveringRoute(rawBasis, reversible);
+    return assemble(rawBasis.map((sigma) => ({ sigma, direct: false, basis: true })), overall, null);
+  }
+  const enumerated = directRoutes(rows, reversible);
+  const direct = enumerated.routes.map((sigma) => orient(sigma, reversible)).sort(byPreference(productive));
+  const basis = independentSubset([...direct, ...rawBasis], rawBasis.length, stepCount);
+  const isDirect = (sigma: bigint[]) => direct.some((route) => sameRoute(route, sigma));
+  const listed: RouteVector[] = basis.map((sigma) => ({ sigma, direct: isDirect(sigma), basis: true }));
+  for (const sigma of direct) if (!basis.some((chosen) => sameRoute(chosen, sigma))) listed.push({ sigma, direct: true, basis: false });
+  const overall = enumerated.complete ? coveringRoute(direct, reversible) : coveringRoute(basis, reversible);
+  return assemble(listed, overall, enumerated.complete);
+}
+
+function assemble(routes: RouteVector[], overall: bigint[] | null, directComplete: boolean | null): RouteSet {
+  if (!overall) return { routes, overall: null, directComplete };
+  const index = routes.findIndex((route) => sameRoute(route.sigma, overall));
+  if (index >= 0) return { routes, overall: index, directComplete };
+  routes.push({ sigma: overall, direct: false, basis: false });
+  return { routes, overall: routes.length - 1, directComplete };
+}

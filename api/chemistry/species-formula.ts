@@ -1,0 +1,79 @@
+import type { FormulaPart } from '@grammar/ast';
+import { elementBySymbol } from './elements';
+
+/** A problem inside a formula, positioned by column on its line. */
+export interface FormulaProblem {
+  code: 'unknown-element' | 'bad-count' | 'undeclared-name';
+  column: number;
+  found: string;
+  message: string;
+}
+
+export interface FormulaCounts {
+  elements: Map<string, number>;
+  problems: FormulaProblem[];
+}
+
+const SYMBOL_RUN = /^(?:[A-Z][a-z]?[0-9]*)+$/;
+const SYMBOL_WITH_COUNT = /([A-Z][a-z]?)([0-9]*)/g;
+
+/** True when a word reads as element symbols with counts (`CH3O2`), known symbols or not. */
+export function looksLikeFormula(word: string): boolean {
+  return SYMBOL_RUN.test(word);
+}
+
+/** A count as written: empty means 1; zero or a leading zero is not a count. */
+function readCount(text: string): number | null {
+  if (text === '') return 1;
+  if (!/^[1-9][0-9]*$/.test(text)) return null;
+  return Number(text);
+}
+
+function add(into: Map<string, number>, symbol: string, count: number): void {
+  into.set(symbol, (into.get(symbol) ?? 0) + count);
+}
+
+function countWord(word: string, column: number, into: Map<string, number>, problems: FormulaProblem[]): void {
+  if (!looksLikeFormula(word)) {
+    const message = `${word} is neither a formula nor a declared name; declare it with "%species ${word} = FORMULA" (or "%species ${word}" for an opaque name)`;
+    problems.push({ code: 'undeclared-name', column, found: word, message });
+    return;
+  }
+  for (const match of word.matchAll(SYMBOL_WITH_COUNT)) {
+    const [, symbol, countText] = match;
+    const at = column + (match.index ?? 0);
+    const count = readCount(countText);
+    if (!elementBySymbol(symbol)) {
+      const message = `${symbol} in ${word} is not an element symbol (symbols are case-sensitive); a named species must be declared: "%species ${word} = FORMULA"`;
+      problems.push({ code: 'unknown-element', column: at, found: symbol, message });
+    } else if (count === null) {
+      problems.push({ code: 'bad-count', column: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });
+    } else add(into, symbol, count);
+  }
+}
+
+/** Element counts of a written formula with nested groups, or the problems found in it. */
+export function countElements(parts: readonly FormulaPart[]): FormulaCounts {
+  const problems: FormulaProblem[] = [];
+  const elements = countInto(parts, problems);
+  return { elements, problems };
+}
+
+function countInto(parts: readonly FormulaPart[], problems: FormulaProblem[]): Map<string, number> {
+  const elements = new Map<string, number>();
+  for (const part of parts) {
+    if (part.kind === 'word') {
+      countWord(part.text, part.column, elements, problems);
+      continue;
+    }
+    const inner = countInto(part.parts, problems);
+    const multiplier = part.count ? readCount(part.count.text) : 1;
+    if (multiplier === null) {
+      const message = `a group count must be a whole number from 1, not ${part.count?.text}`;
+      problems.push({ code: 'bad-count', column: part.count?.column ?? part.column, found: part.count?.text ?? '', message });
+      continue;
+    }
+    for (const [symbol, count] of inner) add(elements, symbol, count * multiplier);
+  }
+  return elements;
+}

@@ -1,0 +1,53 @@
+import type { ParticleNode } from '@grammar/ast';
+import type { Diagnostic } from '@grammar/diagnostics';
+import { finding } from './diagnostic-codes';
+import { resolveParticle, type DeclaredSpecies, type Resolution } from './species-resolve';
+import type { SpeciesInfo } from './species-model';
+
+/** A species met in the mechanism, with where it was first written. */
+export interface RegisteredSpecies extends SpeciesInfo {
+  firstLine: number;
+  firstColumn: number;
+}
+
+/**
+ * Resolves written particles once per distinct spelling and keeps every species in order of
+ * first appearance. Problems are reported at each place they occur.
+ */
+export class SpeciesRegistry {
+  readonly byKey = new Map<string, RegisteredSpecies>();
+  private readonly cache = new Map<string, Resolution>();
+
+  constructor(
+    private readonly declarations: ReadonlyMap<string, DeclaredSpecies>,
+    private readonly diagnostics: Diagnostic[],
+  ) {}
+
+  /** The species for a written particle, or null (with diagnostics) when it cannot be read. */
+  resolve(node: ParticleNode): RegisteredSpecies | null {
+    const text = node.kind === 'species' ? node.text : node.kind;
+    let resolution = this.cache.get(text);
+    if (!resolution) {
+      resolution = resolveParticle(node, this.declarations);
+      this.cache.set(text, resolution);
+    }
+    for (const problem of resolution.problems) {
+      const position = { line: node.line, column: node.column + problem.column };
+      this.diagnostics.push(finding(problem.code, position, problem.message, { found: problem.found }));
+    }
+    return resolution.info ? this.register(resolution.info, node) : null;
+  }
+
+  private register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
+    const known = this.byKey.get(info.key);
+    if (known) return known;
+    const registered = { ...info, firstLine: node.line, firstColumn: node.column };
+    this.byKey.set(info.key, registered);
+    return registered;
+  }
+
+  /** Species in order of first appearance. */
+  all(): RegisteredSpecies[] {
+    return [...this.byKey.values()];
+  }
+}

@@ -1,0 +1,78 @@
+import type { StepNode, TermNode } from '@grammar/ast';
+import type { Diagnostic } from '@grammar/diagnostics';
+import { finding } from './diagnostic-codes';
+import { Fraction } from './fraction';
+import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
+
+/** One species on one side of a step, with equal terms merged (`A + A` is `2 A`). */
+export interface StepTerm {
+  species: RegisteredSpecies;
+  coef: Fraction;
+}
+
+/** A well-formed step, ready for the checks and the routes. */
+export interface StepModel {
+  /** Position among the analysed steps (0-based). */
+  index: number;
+  /** The label, or `#n` for the n-th step when it has none. */
+  id: string;
+  label: string | null;
+  node: StepNode;
+  reversible: boolean;
+  reactants: StepTerm[];
+  products: StepTerm[];
+}
+
+const coefficientCache = new Map<string, Fraction | null>();
+
+function readCoefficient(text: string): Fraction | null {
+  let value = coefficientCache.get(text);
+  if (value === undefined) {
+    value = Fraction.parse(text);
+    if (value?.isZero()) value = null;
+    if (coefficientCache.size < 10_000) coefficientCache.set(text, value);
+  }
+  return value;
+}
+
+function buildSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepTerm[] | null {
+  const merged = new Map<string, StepTerm>();
+  let readable = true;
+  for (const term of terms) {
+    const species = registry.resolve(term.particle);
+    const coef = term.coefficient ? readCoefficient(term.coefficient.text) : Fraction.ONE;
+    if (!coef && term.coefficient) {
+      const message = `coefficient ${term.coefficient.text} must be a positive number (integer, decimal or fraction)`;
+      diagnostics.push(finding('bad-count', term.coefficient, message, { found: term.coefficient.text }));
+    }
+    if (!species || !coef) {
+      readable = false;
+      continue;
+    }
+    const known = merged.get(species.key);
+    if (known) known.coef = known.coef.add(coef);
+    else merged.set(species.key, { species, coef });
+  }
+  return readable ? [...merged.values()] : null;
+}
+
+/** Builds the step model, or null (with diagnostics) when a species or coefficient cannot be read. */
+export function buildStep(node: StepNode, position: number, registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepModel | null {
+  const reactants = buildSide(node.reactants, registry, diagnostics);
+  const products = buildSide(node.products, registry, diagnostics);
+  if (!reactants || !products) return null;
+  const label = node.label?.text ?? null;
+  return { index: -1, id: label ?? `#${position}`, label, node, reversible: node.reversible, reactants, products };
+}
+
+/** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */
+export function netOf(step: StepModel): Map<string, Fraction> {
+  const net = new Map<string, Fraction>();
+  for (const term of step.reactants) net.set(term.species.key, term.coef.neg());
+  for (const term of step.products) {
+    const value = (net.get(term.species.key) ?? Fraction.ZERO).add(term.coef);
+    if (value.isZero()) net.delete(term.species.key);
+    else net.set(term.species.key, value);
+  }
+  return net;
+}

@@ -1,0 +1,95 @@
+import type { Diagnostic } from '@grammar/diagnostics';
+import type { StepJson, TermJson } from './analysis-types';
+import { finding } from './diagnostic-codes';
+import { normalisedStep } from './duplicates';
+import { stepEnthalpy } from './enthalpy';
+import { equationText } from './equation-format';
+import { balanceOf, type StepBalance } from './step-balance';
+import type { StepModel, StepTerm } from './step-model';
+import { checkStepRules, isElementary, molecularity, reportClass } from './step-rules';
+import { suggestFix, type BalancingFix } from './suggest-fix';
+import type { SpeciesInfo } from './species-model';
+import type { EnthalpyLookup } from './thermo';
+
+function termsJson(terms: readonly StepTerm[]): TermJson[] {
+  return terms.map((term) => ({ key: term.species.key, coef: term.coef.toNumber(), coefText: term.coef.toString() }));
+}
+
+function shown(terms: readonly StepTerm[]) {
+  return terms.map((term) => ({ key: term.species.key, coef: term.coef }));
+}
+
+function signed(value: number): string {
+  return value > 0 ? `+${value}` : String(value);
+}
+
+function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
+  for (const [symbol, delta] of Object.entries(balance.imbalance)) {
+    const message = `step ${step.id} does not conserve ${symbol}: products − reactants = ${signed(delta)}`;
+    diagnostics.push(finding('element-imbalance', step.node, message, { found: `${symbol} ${signed(delta)}`, expected: [`${symbol} 0`] }));
+  }
+  if (balance.chargeDelta !== 0) {
+    diagnostics.push(finding('charge-imbalance', step.node, `step ${step.id} changes the charge by ${signed(balance.chargeDelta)}`, { found: signed(balance.chargeDelta), expected: ['0'] }));
+  }
+  if (balance.siteDelta !== 0) {
+    diagnostics.push(finding('site-imbalance', step.node, `step ${step.id} changes the number of surface sites by ${signed(balance.siteDelta)}`, { found: signed(balance.siteDelta), expected: ['0'] }));
+  }
+}
+
+function fixedEquation(step: StepModel, fix: BalancingFix): string {
+  const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
+    const list = shown(terms).map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { ...term, coef: fix.to } : term));
+    if (fix.kind === 'add' && fix.side === name) list.push({ key: fix.key, coef: fix.coef });
+    return list;
+  };
+  return equationText(side(step.reactants, 'reactants'), side(step.products, 'products'), step.reversible);
+}
+
+function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnostics: Diagnostic[]): void {
+  const fix = suggestFix(step, candidates);
+  if (!fix) return;
+  const change = fix.kind === 'coefficient'
+    ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
+    : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
+  const fixed = fixedEquation(step, fix);
+  diagnostics.push(finding('suggested-fix', step.node, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
+}
+
+function reportOpaque(step: StepModel, diagnostics: Diagnostic[]): void {
+  const opaque = [...step.reactants, ...step.products].filter((term) => term.species.opaque).map((term) => term.species.key);
+  if (opaque.length === 0) return;
+  diagnostics.push(finding('opaque-species', step.node, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
+}
+
+/** Checks one step and builds its JSON; diagnostics go to `diagnostics`. */
+export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: readonly SpeciesInfo[], diagnostics: Diagnostic[]): StepJson {
+  const balance = balanceOf(step);
+  reportImbalance(step, balance, diagnostics);
+  if (!balance.balanced) reportFix(step, candidates, diagnostics);
+  reportOpaque(step, diagnostics);
+  checkStepRules(step, diagnostics);
+  const stepClass = reportClass(step, diagnostics);
+  const enthalpy = stepEnthalpy(step, lookup);
+  const node = step.node;
+  return {
+    label: step.label,
+    id: step.id,
+    line: node.line,
+    column: node.column,
+    equation: equationText(shown(step.reactants), shown(step.products), step.reversible),
+    normalised: normalisedStep(step),
+    reversible: step.reversible,
+    reactants: termsJson(step.reactants),
+    products: termsJson(step.products),
+    ...balance,
+    class: stepClass,
+    photolysis: step.reactants.some((term) => term.species.kind === 'photon'),
+    molecularity: molecularity(step),
+    elementary: isElementary(step),
+    dH: enthalpy.dH,
+    thresholdNm: enthalpy.thresholdNm,
+    missingEnthalpies: enthalpy.missing,
+    usedEnthalpies: enthalpy.used,
+    rate: node.rate ? { forward: node.rate.forward, reverse: node.rate.reverse, line: node.rate.line, column: node.rate.column } : null,
+  };
+}

@@ -1,0 +1,71 @@
+import type { Diagnostic } from '@grammar/diagnostics';
+import { finding } from './diagnostic-codes';
+import type { StepModel, StepTerm } from './step-model';
+
+/** The step's class from the change in radical count (analysis.md, "Steps"). */
+export type StepClass = 'initiation' | 'propagation' | 'branching' | 'termination' | 'non-radical';
+
+function radicalCount(terms: readonly StepTerm[]): number {
+  let count = 0;
+  for (const term of terms) if (term.species.radical) count += term.coef.toNumber();
+  return count;
+}
+
+/** Class of a step and its radical counts before and after. */
+export function classify(step: StepModel): { stepClass: StepClass; before: number; after: number } {
+  const before = radicalCount(step.reactants);
+  const after = radicalCount(step.products);
+  let stepClass: StepClass;
+  if (before === 0 && after === 0) stepClass = 'non-radical';
+  else if (before === 0) stepClass = 'initiation';
+  else if (after === before) stepClass = 'propagation';
+  else stepClass = after > before ? 'branching' : 'termination';
+  return { stepClass, before, after };
+}
+
+/** Reactant particles including M, excluding the photon. */
+export function molecularity(step: StepModel): number {
+  let count = 0;
+  for (const term of step.reactants) if (term.species.kind !== 'photon') count += term.coef.toNumber();
+  return count;
+}
+
+/** Integer coefficients and molecularity ≤ 3. */
+export function isElementary(step: StepModel): boolean {
+  const whole = [...step.reactants, ...step.products].every((term) => term.coef.isInteger());
+  return whole && molecularity(step) <= 3;
+}
+
+function thirdBodyCount(terms: readonly StepTerm[]): number {
+  const term = terms.find((t) => t.species.kind === 'third-body');
+  return term ? term.coef.toNumber() : 0;
+}
+
+/** The photon, third-body, molecularity and lumping rules of one step. */
+export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void {
+  const node = step.node;
+  const photon = node.products.find((term) => term.particle.kind === 'photon');
+  if (photon) diagnostics.push(finding('photon-on-product-side', photon.particle, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.particle.text }));
+  const before = thirdBodyCount(step.reactants);
+  const after = thirdBodyCount(step.products);
+  if (before !== after || before > 1) {
+    const message = `M must appear once on each side (step ${step.id} has ${before} on the left and ${after} on the right)`;
+    diagnostics.push(finding('third-body-unpaired', node, message, { found: `${before} M → ${after} M`, expected: ['M on both sides, once each'] }));
+  }
+  const count = molecularity(step);
+  if (count > 3) diagnostics.push(finding('molecularity-above-three', node, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
+  const lumped = [...step.reactants, ...step.products].filter((term) => !term.coef.isInteger());
+  if (lumped.length > 0) {
+    const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
+    diagnostics.push(finding('not-elementary', node, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
+  }
+}
+
+/** Reports steps that start, branch or end radical chains. */
+export function reportClass(step: StepModel, diagnostics: Diagnostic[]): StepClass {
+  const { stepClass, before, after } = classify(step);
+  if (stepClass === 'initiation' || stepClass === 'branching' || stepClass === 'termination') {
+    diagnostics.push(finding('step-class', step.node, `step ${step.id} is ${stepClass === 'initiation' ? 'an' : 'a'} ${stepClass} step: radicals ${before} → ${after}`));
+  }
+  return stepClass;
+}

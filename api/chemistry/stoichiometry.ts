@@ -1,0 +1,53 @@
+import { Fraction, lcm } from './fraction';
+import type { SparseRow } from './integer-matrix';
+import { netOf, type StepModel } from './step-model';
+
+/** The stoichiometric matrix by species: key → (step index → ν), exact. */
+export interface Stoichiometry {
+  stepCount: number;
+  reversible: boolean[];
+  rows: Map<string, Map<number, Fraction>>;
+  /** Keys that are not balanced in routes and are reported aside (hν, M). */
+  aside: Set<string>;
+}
+
+/** Builds ν for every species; photons and M are kept as rows but marked aside. */
+export function buildStoichiometry(steps: readonly StepModel[]): Stoichiometry {
+  const rows = new Map<string, Map<number, Fraction>>();
+  const aside = new Set<string>();
+  steps.forEach((step, index) => {
+    for (const term of [...step.reactants, ...step.products]) {
+      if (term.species.kind === 'photon' || term.species.kind === 'third-body') aside.add(term.species.key);
+    }
+    for (const [key, value] of netOf(step)) {
+      let row = rows.get(key);
+      if (!row) rows.set(key, (row = new Map()));
+      row.set(index, value);
+    }
+  });
+  return { stepCount: steps.length, reversible: steps.map((step) => step.reversible), rows, aside };
+}
+
+/** One species' row scaled to integers (a row scale does not change the null space). */
+export function integerRow(row: ReadonlyMap<number, Fraction>): SparseRow {
+  let scale = 1n;
+  for (const value of row.values()) scale = lcm(scale, value.den);
+  const integers: SparseRow = new Map();
+  for (const [column, value] of row) integers.set(column, (value.num * scale) / value.den);
+  return integers;
+}
+
+/** Integer rows for the given species keys (species that no step changes give no row). */
+export function rowsFor(stoichiometry: Stoichiometry, keys: Iterable<string>): SparseRow[] {
+  const rows: SparseRow[] = [];
+  for (const key of keys) {
+    const row = stoichiometry.rows.get(key);
+    if (row && row.size > 0) rows.push(integerRow(row));
+  }
+  return rows;
+}
+
+/** Keys of the species that routes balance or report (everything except hν and M). */
+export function balancedKeys(stoichiometry: Stoichiometry): string[] {
+  return [...stoichiometry.rows.keys()].filter((key) => !stoichiometry.aside.has(key));
+}

@@ -68,6 +68,11 @@ describe('http client errors', () => {
     expect(error).toMatchObject({ status: 400, code: 'VALIDATION_FAILED', message: 'Invalid input', details });
   });
 
+  it('gives an error body without a message a readable one naming the code', async () => {
+    fetchMock.mockResolvedValue(jsonResponse(409, { error: { code: 'CONFLICT' } }));
+    await expect(http.get('/api/x')).rejects.toMatchObject({ code: 'CONFLICT', message: 'The server refused the request (CONFLICT).' });
+  });
+
   it('maps a response without an error body to an HTTP_<status> error', async () => {
     fetchMock.mockResolvedValue(new Response('<html>Bad gateway</html>', { status: 502, statusText: 'Bad Gateway' }));
     await expect(http.get('/api/session')).rejects.toMatchObject({ status: 502, code: 'HTTP_502' });

@@ -73,7 +73,7 @@ async function readError(response: Response): Promise<ApiError> {
   const body = await response.json().catch(() => null);
   if (isErrorBody(body)) {
     const { code, message, details } = body.error;
-    return new ApiError(response.status, code, message, details);
+    return new ApiError(response.status, code, message || `The server refused the request (${code}).`, details);
   }
   const reason = response.statusText || 'no reason given';
   return new ApiError(response.status, `HTTP_${response.status}`, `The server answered ${response.status} (${reason}).`);

@@ -27,6 +27,7 @@ export function massActionProblem(system: RateSystem, setup: ProblemSetup): Stif
     size: system.speciesCount,
     pattern: jacobian.pattern,
     frozen: fixed,
+    nonNegative: true,
     breakpoints: hasPhotolysis ? lightBreakpoints(light, setup.t0, setup.tEnd) : [],
     derivative: (t, y, out) => massActionDerivative(system, y, level(t), out, fixed),
     jacobian: (t, y, values) => jacobian.fill(y, level(t), values),

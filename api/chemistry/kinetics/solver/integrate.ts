@@ -21,13 +21,14 @@ interface RunState {
 
 function emitDense(state: RunState, hStep: number): void {
   const { options, work, y, t, result } = state;
+  const floor = state.problem.nonNegative ? 0 : -Infinity;
   while (state.nextOutput < options.outputTimes.length && options.outputTimes[state.nextOutput] <= t + hStep) {
     const time = options.outputTimes[state.nextOutput++];
     const theta = Math.min(1, (time - t) / hStep);
     const out = new Float64Array(y.length);
     for (let i = 0; i < y.length; i++) {
       const value = (1 - theta) * y[i] + theta * (work.yNew[i] + (1 - theta) * (work.q1[i] + theta * work.q2[i]));
-      out[i] = value < 0 ? 0 : value;
+      out[i] = Math.max(floor, value);
     }
     result.times.push(time);
     result.states.push(out);
@@ -73,7 +74,7 @@ function attemptStep(state: RunState, hStep: number, end: number, afterRejection
   const { problem, work, options } = state;
   const solved = rodas4Step(problem, work, state.t, state.y, hStep);
   let error = solved ? errorNorm(work, state.y, options, state.frozen) : Infinity;
-  if (error <= 1 && !clipNegatives(state.y, work.yNew, options, state.clips)) error = Infinity;
+  if (error <= 1 && problem.nonNegative && !clipNegatives(state.y, work.yNew, options, state.clips)) error = Infinity;
   state.h = nextStepSize(hStep, error, afterRejection || error > 1);
   if (error > 1) return false;
   emitDense(state, hStep);

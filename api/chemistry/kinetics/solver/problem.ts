@@ -9,6 +9,8 @@ export interface StiffProblem {
   jacobian(t: number, y: Float64Array, values: Float64Array): void;
   /** Writes ∂f/∂t; absent for autonomous problems. */
   timeDerivative?(t: number, y: Float64Array, out: Float64Array): void;
+  /** Concentrations: negative values are clipped (small) or make the step retry (large). */
+  nonNegative?: boolean;
   /** Components that never change (fixed species): left out of the error norm. */
   frozen?: Uint8Array;
   /** Times where f is not smooth (light switched on or off): no step crosses them. */

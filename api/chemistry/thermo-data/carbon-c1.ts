@@ -1,5 +1,5 @@
 import type { ThermoRecord } from './types';
-import { ATCT, CODATA_KEY, ELEMENT_REFERENCE, JANAF, PEDLEY, roughly } from './sources';
+import { ATCT, ATCT_1124, CODATA_KEY, ELEMENT_REFERENCE, JANAF, PEDLEY, roughly } from './sources';
 
 /** One-carbon species, gas phase unless tagged. */
 export const CARBON_C1: readonly ThermoRecord[] = [
@@ -11,7 +11,7 @@ export const CARBON_C1: readonly ThermoRecord[] = [
   { key: 'CH3', name: 'methyl radical', dfH: 146.4, uncertainty: 0.5, source: roughly(ATCT), smiles: '[CH3]' },
   { key: 'CH3O2', name: 'methylperoxy radical', dfH: 12, uncertainty: 3, source: roughly(ATCT), smiles: 'CO[O]' },
   { key: 'CH3O', name: 'methoxy radical', dfH: 21, uncertainty: 2, source: roughly(ATCT), smiles: 'C[O]' },
-  { key: 'CH2O', name: 'formaldehyde', dfH: -109.2, uncertainty: 0.5, source: roughly(ATCT), smiles: 'C=O' },
+  { key: 'CH2O', name: 'formaldehyde', dfH: -109.229, uncertainty: 0.096, source: ATCT_1124, smiles: 'C=O' },
   { key: 'HCO', name: 'formyl radical', dfH: 41.8, uncertainty: 1, source: roughly(ATCT), smiles: '[CH]=O' },
   { key: 'CH3OH', name: 'methanol (gas)', dfH: -200.9, uncertainty: 1, source: roughly(ATCT), smiles: 'CO' },
   { key: 'HCOOH', name: 'formic acid (gas)', dfH: -378.6, uncertainty: 1, source: roughly(PEDLEY), smiles: 'OC=O' },

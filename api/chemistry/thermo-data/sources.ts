@@ -12,6 +12,9 @@ export const NBS = `NBS Tables of Chemical Thermodynamic Properties (Wagman et a
 export const PEDLEY = `Pedley, Naylor & Kirby, Thermochemical Data of Organic Compounds, 2nd ed. (1986), ${FROM_MEMORY}`;
 export const WEBBOOK_JANAF = 'NIST-JANAF Thermochemical Tables (Chase 1998) as listed in the NIST Chemistry WebBook, looked up';
 export const CCCBDB = 'NIST CCCBDB Release 22 (2022), experimental ΔfH(298.15 K), looked up';
+// Ruscic et al., J. Phys. Chem. A 110 (2006) 6592, values printed in kcal/mol (× 4.184).
+export const ATCT_2006 = lookedUp('Active Thermochemical Tables, Ruscic et al., J. Phys. Chem. A 110 (2006) 6592');
+export const ATCT_1124 = lookedUp('Active Thermochemical Tables, ver. 1.124 (atct.anl.gov)');
 export const ELEMENT_REFERENCE = 'reference state of the element: 0 by definition';
 
 /** A source whose value was recalled only to a few kJ/mol: its uncertainty is widened to cover that. */

@@ -5,11 +5,13 @@ import { createDb } from './db';
 import { createFakeGithub } from './dev/fake-github';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
+import { setUpMail } from './mail/mail-setup';
 
 const env = loadEnv();
 const logger = createLogger(env.LOG_LEVEL);
 const db = createDb(env.DATABASE_URL);
-const app = createApp({ db, config: configFromEnv(env), logger });
+const mail = await setUpMail(env, db, logger);
+const app = createApp({ db, config: configFromEnv(env), logger, mailTransport: mail.transport, devInbox: mail.devInbox });
 const servers: Server[] = [];
 
 if (useFakeGithub(env)) {
@@ -29,6 +31,7 @@ async function shutdown(signal: string): Promise<void> {
   forced.unref();
   await Promise.all(servers.map((s) => new Promise((resolve) => s.close(resolve))));
   await app.closeResources();
+  await mail.stop();
   await db.destroy();
   process.exit(0);
 }

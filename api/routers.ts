@@ -1,12 +1,46 @@
 import type { Router } from 'express';
 import type { Knex } from 'knex';
+import { attachmentsRoutes, mechanismAttachmentsRoutes } from './attachments/attachments.routes';
+import { comparisonRoutes } from './comparison/comparison.routes';
+import type { CapturedMail } from './mail/fake-smtp';
+import { inboxRoutes } from './mail/inbox.routes';
+import type { MailTransport } from './mail/mail-transport';
+import { outboxKick } from './mail/outbox-kick';
+import { mechanismsRoutes } from './mechanisms/mechanisms.routes';
+import { notificationsRoutes } from './notifications/notifications.routes';
+import { queuesRoutes } from './queues/queues.routes';
+import { remarksRoutes } from './reviews/remarks.routes';
+import { mechanismRoundsRoutes, roundsRoutes } from './reviews/rounds.routes';
+import { revisionsRoutes } from './revisions/revisions.routes';
 
 /** What feature routers need besides the database (mail, job queue…), filled in as features arrive. */
 export interface FeatureDeps {
   db: Knex;
+  /** SMTP for the mail outbox; without one, messages wait in the outbox (none is lost). */
+  mailTransport?: MailTransport | null;
+  /** What the local fake SMTP server caught (development and tests); null elsewhere. */
+  devInbox?: CapturedMail[] | null;
+  /** Endorsements a review round needs before it can be adopted (default 2). */
+  endorsementsNeeded?: number;
+  /** Largest attachment in bytes (default 10 MB). */
+  maxAttachmentBytes?: number;
 }
 
 /** Every feature's router with its mount path: the one list app.ts mounts. */
-export function apiRouters(_deps: FeatureDeps): Array<[string, Router]> {
-  return [];
+export function apiRouters(deps: FeatureDeps): Array<[string, Router]> {
+  const { db } = deps;
+  return [
+    ...(deps.mailTransport ? [['/api', outboxKick(db, deps.mailTransport)] as [string, Router]] : []),
+    ['/api/mechanisms', mechanismsRoutes(db)],
+    ['/api/mechanisms', revisionsRoutes(db)],
+    ['/api/mechanisms', comparisonRoutes(db)],
+    ['/api/mechanisms', mechanismRoundsRoutes(db, { endorsementsNeeded: deps.endorsementsNeeded ?? 2 })],
+    ['/api/mechanisms', mechanismAttachmentsRoutes(db, deps.maxAttachmentBytes ?? 10 * 1024 * 1024)],
+    ['/api/rounds', roundsRoutes(db)],
+    ['/api/remarks', remarksRoutes(db)],
+    ['/api/attachments', attachmentsRoutes(db)],
+    ['/api/notifications', notificationsRoutes(db)],
+    ['/api/queues', queuesRoutes(db)],
+    ['/api/dev', inboxRoutes(deps.devInbox ?? null)],
+  ];
 }

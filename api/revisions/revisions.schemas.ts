@@ -1,0 +1,15 @@
+import { z } from 'zod';
+
+/** A mechanism's source text; the grammar caps a line, this caps the whole text stored per revision. */
+export const Source = z.string().max(500_000, 'A revision holds at most 500,000 characters');
+export const ChangeNote = z.string().trim().max(2_000).default('');
+
+export const MechanismParams = z.object({ slug: z.string().min(1).max(120) });
+export const RevisionParams = MechanismParams.extend({ number: z.coerce.number().int().positive() });
+
+export const CreateRevisionBody = z.object({
+  base: z.number().int().positive({ message: 'Name the revision this one is based on (its number)' }),
+  source: Source,
+  changeNote: ChangeNote,
+});
+export type CreateRevisionBody = z.infer<typeof CreateRevisionBody>;

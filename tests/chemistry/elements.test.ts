@@ -20,6 +20,16 @@ const IUPAC_2021_ABRIDGED: [string, number, number][] = [
   ['Bi', 208.98, 0.005], ['Th', 232.04, 0.005], ['U', 238.03, 0.005],
 ];
 
+// Looked up: the changes listed in the abstracts of "Standard atomic weights of the elements 2021"
+// (Prohaska et al., Pure Appl. Chem. 94 (2022) 573) and "Atomic weights of the elements 2013"
+// (Meija et al., Pure Appl. Chem. 88 (2016) 265; isotopic-abundance revisions kept in 2021).
+const CIAAW_REVISIONS: [string, number][] = [
+  ['Hf', 178.486], ['Ir', 192.217], ['Yb', 173.045], ['Cd', 112.414], ['Mo', 95.95], ['Se', 78.971], ['Th', 232.0377],
+];
+
+// 2021 report: argon [39.792, 39.963] and lead [206.14, 207.94] became intervals.
+const CIAAW_2021_INTERVALS: [string, number, number][] = [['Ar', 39.792, 39.963], ['Pb', 206.14, 207.94]];
+
 // IUPAC periodic table: mass number of the longest-lived isotope, in brackets (from memory).
 const MASS_NUMBERS: [string, number][] = [
   ['Tc', 97], ['Pm', 145], ['Po', 209], ['Rn', 222], ['Ra', 226], ['Pu', 244], ['Og', 294],
@@ -52,6 +62,16 @@ describe('ELEMENTS', () => {
 
   it.each(IUPAC_2021_ABRIDGED)('%s rounds to the IUPAC 2021 abridged value %f', (symbol, abridged, halfUnit) => {
     expect(Math.abs((elementBySymbol(symbol)?.weight ?? NaN) - abridged)).toBeLessThanOrEqual(halfUnit + 1e-12);
+  });
+
+  it.each(CIAAW_REVISIONS)('%s has the CIAAW standard atomic weight %f (looked up)', (symbol, weight) => {
+    expect(elementBySymbol(symbol)?.weight).toBe(weight);
+  });
+
+  it.each(CIAAW_2021_INTERVALS)('%s carries a conventional value inside its 2021 interval [%f, %f]', (symbol, low, high) => {
+    const weight = elementBySymbol(symbol)?.weight ?? NaN;
+    expect(weight).toBeGreaterThanOrEqual(low);
+    expect(weight).toBeLessThanOrEqual(high);
   });
 
   it.each(MASS_NUMBERS)('%s carries mass number %i, marked as such', (symbol, massNumber) => {

@@ -2,8 +2,10 @@
  * The 118 elements: symbol, atomic number, English name (IUPAC spelling) and atomic weight.
  *
  * Weights follow the IUPAC standard atomic weights (CIAAW 2021, Prohaska et al., Pure Appl. Chem.
- * 94 (2022) 573), written from memory. Elements whose standard weight is an interval (H, Li, B, C,
- * N, O, Mg, Si, S, Cl, Ar, Br, Tl, Pb) carry IUPAC's conventional value. Elements without a
+ * 94 (2022) 573), written from memory; the revisions named in the abstracts of the CIAAW 2013
+ * and 2021 reports (Ar, Cd, Hf, Ir, Mo, Pb, Se, Th, Yb) were checked against them. Elements whose
+ * standard weight is an interval (H, Li, B, C, N, O, Mg, Si, S, Cl, Ar, Br, Tl, Pb) carry IUPAC's
+ * conventional value. Elements without a
  * standard atomic weight carry the mass number of their longest-lived isotope (IUPAC periodic
  * table, shown there in brackets), marked `M`.
  */

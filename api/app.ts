@@ -47,7 +47,7 @@ export function createApp(deps: AppDeps): Express & { closeResources: () => Prom
   if (deps.logger) app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(securityHeaders(config.github.authorizationUrl));
   app.use('/api/health', healthRoutes(db));
-  app.use(express.json({ limit: '2mb' }));
+  app.use(express.json({ limit: '8mb' }));
   app.use(sessions.middleware);
   app.use(passport.session());
   app.use('/auth', githubRoutes(passport));

@@ -1,5 +1,6 @@
 import type { Router } from 'express';
 import type { Knex } from 'knex';
+import { analysisRoutes } from './analysis/analysis.routes';
 import { attachmentsRoutes, mechanismAttachmentsRoutes } from './attachments/attachments.routes';
 import { comparisonRoutes } from './comparison/comparison.routes';
 import type { CapturedMail } from './mail/fake-smtp';
@@ -31,6 +32,7 @@ export function apiRouters(deps: FeatureDeps): Array<[string, Router]> {
   const { db } = deps;
   return [
     ...(deps.mailTransport ? [['/api', outboxKick(db, deps.mailTransport)] as [string, Router]] : []),
+    ['/api/analyse', analysisRoutes(db)],
     ['/api/mechanisms', mechanismsRoutes(db)],
     ['/api/mechanisms', revisionsRoutes(db)],
     ['/api/mechanisms', comparisonRoutes(db)],

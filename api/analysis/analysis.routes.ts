@@ -1,0 +1,27 @@
+import { Router } from 'express';
+import type { Knex } from 'knex';
+import { rateLimit } from 'express-rate-limit';
+import { requireUser } from '../middleware/require-auth';
+import { AnalyseBody } from './analysis.schemas';
+import { analyseText } from './analysis.service';
+
+/** The workbench analyses as the author types: generous, but bounded per person. */
+const perPerson = rateLimit({
+  windowMs: 60_000,
+  limit: 240,
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  keyGenerator: (req) => `user:${req.user?.id ?? 'anonymous'}`,
+  handler: (_req, res) => {
+    res.status(429).json({ error: { code: 'RATE_LIMITED', message: 'Too many analyses in a minute; wait a moment' } });
+  },
+});
+
+export function analysisRoutes(db: Knex): Router {
+  const router = Router();
+  router.post('/', requireUser, perPerson, async (req, res) => {
+    const { text } = AnalyseBody.parse(req.body);
+    res.json(await analyseText(db, text));
+  });
+  return router;
+}

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { solveSteadyState } from '@api/chemistry/kinetics/analysis/steady-state';
+import { buildRateSystem } from '@api/chemistry/kinetics/build-system';
+import { modelOf } from './model-builder';
+
+function systemOf(lines: string[]) {
+  const { system } = buildRateSystem(modelOf(lines, 'mol L^-1'), { T: 298, P: 1, M: 1 });
+  return system!;
+}
+
+describe('the steady state by damped Newton', () => {
+  it('handles the singular Jacobian of a closed A ⇌ B ⇌ C system through its conservation law', () => {
+    // Equilibrium of consecutive opposed reactions: [B]/[A] = k1/k−1, [C]/[B] = k2/k−2 (Atkins'
+    // Physical Chemistry, equilibrium constant from rate constants); the total 1.5 stays.
+    const system = systemOf(['E1: A <=> B @ 3 | 1', 'E2: B <=> C @ 0.5 | 2']);
+    const steady = solveSteadyState(system, {
+      start: Float64Array.from([1.5, 0, 0]), fixed: new Uint8Array(3), light: 1, rtol: 1e-12, atol: 1e-15,
+    });
+    expect(steady.converged).toBe(true);
+    expect(steady.conservationLaws).toBe(1);
+    const [a, b, c] = steady.concentrations;
+    expect(b / a).toBeCloseTo(3, 10);
+    expect(c / b).toBeCloseTo(0.25, 10);
+    expect(a + b + c).toBeCloseTo(1.5, 12);
+  });
+
+  it('finds a nonlinear steady state 2 A ⇌ A2 from a poor start: K[A]² = [A2] with A + 2 A2 kept', () => {
+    const system = systemOf(['D1: 2 A <=> A2 @ 10 | 0.1']);
+    const steady = solveSteadyState(system, {
+      start: Float64Array.from([0, 0.5]), fixed: new Uint8Array(2), light: 1, rtol: 1e-12, atol: 1e-15,
+    });
+    expect(steady.converged).toBe(true);
+    const [a, dimer] = steady.concentrations;
+    // Quadratic: 2K a² + a − 1 = 0 with K = 100 and total A = 1: a = (−1 + √(1 + 8K)) / (4K).
+    expect(a).toBeCloseTo((-1 + Math.sqrt(801)) / 400, 12);
+    expect(dimer / a ** 2).toBeCloseTo(100, 8);
+  });
+
+  it('says so when there is no steady state to find (B keeps growing from a fixed source A)', () => {
+    const system = systemOf(['G1: A -> B @ 1']);
+    const steady = solveSteadyState(system, { start: Float64Array.from([1, 0]), fixed: Uint8Array.from([1, 0]), light: 1, rtol: 1e-9, atol: 1e-12 });
+    expect(steady.converged).toBe(false);
+    expect(steady.message).toMatch(/singular/);
+    expect(steady.residual).toBe(1);
+  });
+});

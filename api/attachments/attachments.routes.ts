@@ -30,7 +30,8 @@ export function attachmentsRoutes(db: Knex): Router {
   router.use(requireUser);
   router.get('/:id/content', async (req, res) => {
     const { meta, content } = await service.readAttachment(db, req.user!, AttachmentParams.parse(req.params).id);
-    res.type(meta.mediaType).attachment(meta.filename).set('X-Content-Type-Options', 'nosniff').send(content);
+    // attachment() guesses a type from the file name; the sniffed type must win, so it is set after.
+    res.attachment(meta.filename).type(meta.mediaType).set('X-Content-Type-Options', 'nosniff').send(content);
   });
   return router;
 }

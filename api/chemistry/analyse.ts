@@ -4,7 +4,7 @@ import type { MechanismAnalysis, SpeciesJson, SpeciesRole, StepJson } from './an
 import { finding } from './diagnostic-codes';
 import { reportDuplicates } from './duplicates';
 import { cachedLookup } from './enthalpy';
-import { formedAndConsumedSpecies } from './intermediates';
+import { formedAndConsumedKeys } from './formed-and-consumed';
 import { readDirectives, type MechanismSettings } from './directives';
 import { reportRadicalMarks } from './radical-marks';
 import { analyseRoutes, type RouteAnalysis } from './route-report';
@@ -12,7 +12,7 @@ import { assignRoles } from './roles';
 import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
 import { buildStep, type StepModel } from './step-model';
 import { reportStep } from './step-report';
-import { buildStoichiometry, type Stoichiometry } from './stoichiometry';
+import { buildStoichiometry } from './stoichiometry';
 import { builtinEnthalpy, type EnthalpyLookup } from './thermo';
 import { resolveDirectiveSpecies } from './directive-species';
 import { sortDiagnostics } from './diagnostic-order';
@@ -54,10 +54,12 @@ function reportMissingEnthalpies(steps: readonly StepJson[], diagnostics: Diagno
   diagnostics.push(finding('enthalpy-missing', firstStep, `no enthalpy of formation for ${shown}; ΔH of the steps with them is left empty`, { found: firstKey }));
 }
 
-function routesOrNote(steps: StepModel[], stepJson: StepJson[], stoichiometry: Stoichiometry, species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
-  const context = { steps, stoichiometry, stepDH: stepJson.map((step) => step.dH), lookup, diagnostics };
-  if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) return analyseRoutes(context, species, settings, maxRouteSteps);
-  const intermediates = formedAndConsumedSpecies(stoichiometry, species, settings.terminal).map((s) => s.key);
+function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
+  if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) {
+    const context = { steps, stoichiometry: buildStoichiometry(steps), stepDH: stepJson.map((step) => step.dH), lookup, diagnostics };
+    return analyseRoutes(context, species, settings, maxRouteSteps);
+  }
+  const intermediates = formedAndConsumedKeys(steps, species, settings.terminal);
   const message = `routes are computed for up to ${MAX_ROUTE_ANALYSIS_STEPS} steps; this mechanism has ${steps.length}`;
   diagnostics.push(finding('routes-too-large', steps[0].node, message));
   const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;
@@ -87,9 +89,8 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
   reportRadicalMarks(species, diagnostics);
   reportMissingEnthalpies(stepJson, diagnostics);
   const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
-  const stoichiometry = buildStoichiometry(steps);
   const routes = steps.length > 0
-    ? routesOrNote(steps, stepJson, stoichiometry, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)
+    ? routesOrNote(steps, stepJson, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)
     : emptyRoutes(diagnostics);
   return {
     title: settings.title,

@@ -1,4 +1,5 @@
 import { Fraction, gcd, lcm } from './fraction';
+import { Overflow, reduceNumbers } from './integer-matrix-fast';
 
 /** A sparse row: column index → non-zero integer. */
 export type SparseRow = Map<number, bigint>;
@@ -46,10 +47,22 @@ function pickPivot(rows: SparseRow[], column: number): number {
 }
 
 /**
- * Fully reduced echelon form of an integer matrix by fraction-free Gauss–Jordan elimination
- * (exact: BigInt only). The input rows are copied, not changed.
+ * Fully reduced echelon form of an integer matrix by fraction-free Gauss–Jordan elimination,
+ * exact: on safe-integer numbers while they suffice, else on BigInt. The input is not changed.
  */
 export function reduce(input: readonly SparseRow[], columnCount: number): Echelon {
+  try {
+    const fast = reduceNumbers(input, columnCount);
+    const rows = fast.rows.map((row) => new Map([...row].map(([column, value]) => [column, BigInt(value)])));
+    return { rows, pivots: fast.pivots };
+  } catch (error) {
+    if (!(error instanceof Overflow)) throw error;
+    return reduceBig(input, columnCount);
+  }
+}
+
+/** The same elimination on BigInt, for matrices whose numbers outgrow 2^53. */
+export function reduceBig(input: readonly SparseRow[], columnCount: number): Echelon {
   const remaining = input.filter((row) => row.size > 0).map((row) => new Map(row));
   const rows: SparseRow[] = [];
   const pivots: number[] = [];
@@ -99,7 +112,12 @@ export function nullSpace(input: readonly SparseRow[], columnCount: number): big
 
 /** Rank of an integer matrix. */
 export function rank(input: readonly SparseRow[], columnCount: number): number {
-  return reduce(input, columnCount).pivots.length;
+  try {
+    return reduceNumbers(input, columnCount).pivots.length;
+  } catch (error) {
+    if (!(error instanceof Overflow)) throw error;
+    return reduceBig(input, columnCount).pivots.length;
+  }
 }
 
 /** |x| for BigInt, exported for callers that orient vectors. */

@@ -1,4 +1,7 @@
+import { directRoutes } from './direct-routes';
 import { rank } from './integer-matrix';
+import { orient } from './route-vectors';
+import { netOfRoute } from './routes';
 import type { RegisteredSpecies } from './species-registry';
 import { balancedKeys, rowsFor, type Stoichiometry } from './stoichiometry';
 
@@ -21,9 +24,20 @@ function formedAndConsumed(stoichiometry: Stoichiometry, key: string): boolean {
   return formed && consumed;
 }
 
-/** True when the null space of the intermediates' rows holds a route with a non-empty net. */
-export function hasProductiveRoute(stoichiometry: Stoichiometry, intermediates: readonly string[]): boolean {
-  const own = rank(rowsFor(stoichiometry, intermediates), stoichiometry.stepCount);
+/**
+ * True when some route that cancels the intermediates has a non-empty net reaction. For small
+ * mechanisms the routes must also run one-way steps forwards (checked on the direct routes);
+ * for larger ones, or when the direct-route enumeration stops at its limit, the test is the
+ * rank: the intermediates' rows do not span the rows of every species.
+ */
+export function hasProductiveRoute(stoichiometry: Stoichiometry, intermediates: readonly string[], maxDirectSteps = 0): boolean {
+  const rows = rowsFor(stoichiometry, intermediates);
+  if (stoichiometry.stepCount <= maxDirectSteps) {
+    const enumerated = directRoutes(rows, stoichiometry.reversible);
+    const skip = new Set([...intermediates, ...stoichiometry.aside]);
+    if (enumerated.complete) return enumerated.routes.some((sigma) => netOfRoute(stoichiometry, orient(sigma, stoichiometry.reversible), skip).size > 0);
+  }
+  const own = rank(rows, stoichiometry.stepCount);
   return rank(rowsFor(stoichiometry, balancedKeys(stoichiometry)), stoichiometry.stepCount) > own;
 }
 
@@ -35,9 +49,9 @@ function listed(keys: readonly string[]): string {
   return keys.length > 0 ? keys.join(', ') : 'none';
 }
 
-function fromDeclared(stoichiometry: Stoichiometry, keys: string[]): IntermediateChoice {
+function fromDeclared(stoichiometry: Stoichiometry, keys: string[], maxDirectSteps: number): IntermediateChoice {
   const explanation = `Intermediates as declared with %intermediates: ${listed(keys)}.`;
-  return { keys, explanation, productive: hasProductiveRoute(stoichiometry, keys) };
+  return { keys, explanation, productive: hasProductiveRoute(stoichiometry, keys, maxDirectSteps) };
 }
 
 /** Species both formed and consumed (reversible steps count both ways), less the terminal ones. */
@@ -55,24 +69,26 @@ export function chooseIntermediates(
   stoichiometry: Stoichiometry,
   species: readonly RegisteredSpecies[],
   declared: { intermediates: string[] | null; terminal: ReadonlySet<string> },
+  maxDirectSteps: number,
 ): IntermediateChoice {
-  if (declared.intermediates) return fromDeclared(stoichiometry, declared.intermediates);
+  const productive = (keys: readonly string[]) => hasProductiveRoute(stoichiometry, keys, maxDirectSteps);
+  if (declared.intermediates) return fromDeclared(stoichiometry, declared.intermediates, maxDirectSteps);
   const initial = formedAndConsumedSpecies(stoichiometry, species, declared.terminal);
   const keys = initial.map((s) => s.key);
   const terminalNote = declared.terminal.size > 0 ? ` (less the %terminal species ${listed([...declared.terminal])})` : '';
   const base = `Species both formed and consumed${terminalNote}: ${listed(keys)}.`;
-  if (keys.length === 0 || hasProductiveRoute(stoichiometry, keys)) {
-    return { keys, explanation: `${base} They are treated as intermediates.`, productive: hasProductiveRoute(stoichiometry, keys) };
+  const productiveAsIs = productive(keys);
+  if (keys.length === 0 || productiveAsIs) {
+    return { keys, explanation: `${base} They are treated as intermediates.`, productive: productiveAsIs };
   }
   for (const released of initial.filter(closedShellNeutral)) {
     const trial = keys.filter((key) => key !== released.key);
-    if (hasProductiveRoute(stoichiometry, trial)) {
-      const why = `Cancelling all of them leaves only null cycles, so ${released.key} (closed-shell, neutral, first met on line ${released.firstLine}) is released as a reactant or product; intermediates: ${listed(trial)}. Pin the choice with %terminal or %intermediates.`;
+    if (productive(trial)) {
+      const why = `Cancelling all of them leaves no productive route (only null cycles, or routes that would run a one-way step backwards), so ${released.key} (closed-shell, neutral, first met on line ${released.firstLine}) is released as a reactant or product; intermediates: ${listed(trial)}. Pin the choice with %terminal or %intermediates.`;
       return { keys: trial, explanation: `${base} ${why}`, productive: true };
     }
   }
   const reactive = initial.filter((s) => s.reactive).map((s) => s.key);
-  const productive = hasProductiveRoute(stoichiometry, reactive);
-  const why = `Cancelling them leaves only null cycles, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
-  return { keys: reactive, explanation: `${base} ${why}`, productive };
+  const why = `Cancelling them leaves no productive route, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
+  return { keys: reactive, explanation: `${base} ${why}`, productive: productive(reactive) };
 }

@@ -1,5 +1,6 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
+import { speciesKey } from './species-model';
 import type { RegisteredSpecies } from './species-registry';
 
 /**
@@ -13,8 +14,9 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
     const position = { line: item.firstLine, column: item.firstColumn };
     const odd = item.electrons % 2 === 1;
     if (odd && item.radicalMarks === 0) {
-      const message = `${item.key} has ${item.electrons} electrons; mark it as a radical (${item.formula}•) or ignore`;
-      diagnostics.push(finding('odd-electrons-unmarked', position, message, { found: item.key, expected: [`${item.formula}•`] }));
+      const marked = speciesKey(item.name ?? item.formula, [], 1, item.charge, item.sites);
+      const message = `${item.key} has ${item.electrons} electrons; mark it as a radical (${marked}) or ignore`;
+      diagnostics.push(finding('odd-electrons-unmarked', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {
       const message = `${item.key} has ${item.electrons} electrons (even); give the state a tag, e.g. ${item.formula}(3P), or drop the mark`;
       diagnostics.push(finding('even-electrons-marked', position, message, { found: item.key }));

@@ -72,7 +72,7 @@ export function analyseRoutes(
   declared: { intermediates: string[] | null; terminal: ReadonlySet<string> },
   maxRouteSteps: number,
 ): RouteAnalysis {
-  const choice = chooseIntermediates(context.stoichiometry, species, declared);
+  const choice = chooseIntermediates(context.stoichiometry, species, declared, maxRouteSteps);
   const set = findRoutes(context.stoichiometry, choice.keys, maxRouteSteps);
   const routes = set.routes.map(({ sigma, direct, basis }) => routeJson(sigma, { direct, basis }, context));
   reportRouteNotes(set, routes.some((route) => route.kind === 'productive'), maxRouteSteps, context);

@@ -19,14 +19,20 @@ export interface RouteSet {
   directComplete: boolean | null;
 }
 
-/** Σ σ_s ν_{s,i} per species (zeros dropped), exactly. */
+/** Σ σ_s ν_{s,i} per species (zeros dropped), exactly, in order of first appearance. */
 export function netOfRoute(stoichiometry: Stoichiometry, sigma: readonly bigint[], skip: ReadonlySet<string>): Map<string, Fraction> {
+  const totals = new Map<string, Fraction>();
+  sigma.forEach((multiplier, step) => {
+    if (multiplier === 0n) return;
+    const factor = new Fraction(multiplier);
+    for (const [key, value] of stoichiometry.columns[step]) {
+      if (!skip.has(key)) totals.set(key, (totals.get(key) ?? Fraction.ZERO).add(value.mul(factor)));
+    }
+  });
   const net = new Map<string, Fraction>();
-  for (const [key, row] of stoichiometry.rows) {
-    if (skip.has(key)) continue;
-    let total = Fraction.ZERO;
-    for (const [step, value] of row) if (sigma[step] !== 0n) total = total.add(value.mul(new Fraction(sigma[step])));
-    if (!total.isZero()) net.set(key, total);
+  for (const key of stoichiometry.rows.keys()) {
+    const total = totals.get(key);
+    if (total && !total.isZero()) net.set(key, total);
   }
   return net;
 }

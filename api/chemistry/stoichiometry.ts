@@ -7,6 +7,8 @@ export interface Stoichiometry {
   stepCount: number;
   reversible: boolean[];
   rows: Map<string, Map<number, Fraction>>;
+  /** The same numbers by step: ν of each species the step changes. */
+  columns: Map<string, Fraction>[];
   /** Keys that are not balanced in routes and are reported aside (hν, M). */
   aside: Set<string>;
 }
@@ -15,17 +17,20 @@ export interface Stoichiometry {
 export function buildStoichiometry(steps: readonly StepModel[]): Stoichiometry {
   const rows = new Map<string, Map<number, Fraction>>();
   const aside = new Set<string>();
+  const columns: Map<string, Fraction>[] = [];
   steps.forEach((step, index) => {
     for (const term of [...step.reactants, ...step.products]) {
       if (term.species.kind === 'photon' || term.species.kind === 'third-body') aside.add(term.species.key);
     }
-    for (const [key, value] of netOf(step)) {
+    const column = netOf(step);
+    columns.push(column);
+    for (const [key, value] of column) {
       let row = rows.get(key);
       if (!row) rows.set(key, (row = new Map()));
       row.set(index, value);
     }
   });
-  return { stepCount: steps.length, reversible: steps.map((step) => step.reversible), rows, aside };
+  return { stepCount: steps.length, reversible: steps.map((step) => step.reversible), rows, columns, aside };
 }
 
 /** One species' row scaled to integers (a row scale does not change the null space). */

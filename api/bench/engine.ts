@@ -1,0 +1,60 @@
+import { parseMechanism } from '@grammar/parse';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import { generateMechanism } from '../../examples/generate-large';
+import type { BenchRow, BenchSuite } from './types';
+
+const SIZES = [1_000, 10_000, 50_000];
+
+function timed<T>(work: () => T): { result: T; ms: number } {
+  const start = performance.now();
+  const result = work();
+  return { result, ms: performance.now() - start };
+}
+
+/** The same steps as plain JSON: what parsing costs when the text is already structured (the floor). */
+function prestructured(text: string): string {
+  const steps = parseMechanism(text).steps.map((step) => ({
+    label: step.label?.text ?? null,
+    reversible: step.reversible,
+    reactants: step.reactants.map((term) => ({ coef: term.coefficient?.text ?? '1', species: term.particle.kind === 'species' ? term.particle.text : term.particle.text })),
+    products: step.products.map((term) => ({ coef: term.coefficient?.text ?? '1', species: term.particle.text })),
+    rate: step.rate?.forward ?? null,
+  }));
+  return JSON.stringify(steps);
+}
+
+function sizeRows(steps: number): BenchRow[] {
+  const text = generateMechanism(steps);
+  const json = prestructured(text);
+  const floor = timed(() => JSON.parse(json) as unknown[]);
+  const heapBefore = process.memoryUsage().heapUsed;
+  const run = timed(() => analyseMechanism(text));
+  const heldMb = (process.memoryUsage().heapUsed - heapBefore) / 2 ** 20;
+  const group = 'engine';
+  const name = `${steps} steps`;
+  const floorRow = { name: 'JSON.parse of the same steps', value: floor.ms, unit: 'ms' };
+  return [
+    { group, name: `${name}: check time`, value: run.ms, unit: 'ms', baseline: floorRow },
+    { group, name: `${name}: steps/s`, value: (steps / run.ms) * 1000, unit: 'steps/s', baseline: { ...floorRow, name: 'JSON.parse steps/s', value: (steps / floor.ms) * 1000, unit: 'steps/s' }, target: '≥ 50000 steps/s' },
+    { group, name: `${name}: heap held by the result`, value: heldMb, unit: 'MB' },
+    { group, name: `${name}: peak RSS of the process so far`, value: process.resourceUsage().maxRSS / 1024, unit: 'MB' },
+  ];
+}
+
+function routeRows(): BenchRow[] {
+  const text = generateMechanism(300, 40);
+  analyseMechanism(text);
+  const run = timed(() => analyseMechanism(text));
+  const { steps, species, routes } = run.result;
+  const name = `route analysis, ${steps.length} steps / ${species.length} species (${routes.length} routes)`;
+  return [{ group: 'engine', name, value: run.ms, unit: 'ms', target: '< 500 ms' }];
+}
+
+/** Engine throughput on generated mechanisms of 1k, 10k and 50k steps, and exact route analysis at 300 steps. */
+const engineBench: BenchSuite = async () => {
+  analyseMechanism(generateMechanism(2_000));
+  const rows = SIZES.flatMap(sizeRows);
+  return [...rows, ...routeRows()];
+};
+
+export default engineBench;

@@ -1,0 +1,158 @@
+import { describe, expect, it } from 'vitest';
+import { parseMechanism, type SpeciesNode, type StepNode } from '@grammar/parse';
+
+// Each row is one rule of the step notation (shared design: step-notation.md).
+function onlyStep(text: string): StepNode {
+  const parsed = parseMechanism(text);
+  expect(parsed.diagnostics).toEqual([]);
+  expect(parsed.steps).toHaveLength(1);
+  return parsed.steps[0];
+}
+
+function firstSpecies(text: string): SpeciesNode {
+  const particle = onlyStep(text).reactants[0].particle;
+  expect(particle.kind).toBe('species');
+  return particle as SpeciesNode;
+}
+
+describe('parseMechanism: accepted notation', () => {
+  it.each([
+    ['-> one-way', 'A1: O3 -> O2 + O(3P)', false],
+    ['→ one-way', 'O3 → O2 + O(3P)', false],
+    ['<=> reversible', 'N2O4 <=> 2 NO2', true],
+    ['⇌ reversible', 'N2O4 ⇌ 2 NO2', true],
+  ])('reads the %s arrow', (_name, line, reversible) => {
+    expect(onlyStep(line).reversible).toBe(reversible);
+  });
+
+  it.each([
+    ['an integer', '2 NO2 -> N2O4', '2'],
+    ['a decimal', '0.5 O2 + CO -> CO2', '0.5'],
+    ['a fraction', '1/2 O2 + CO -> CO2', '1/2'],
+  ])('reads a coefficient written as %s', (_name, line, text) => {
+    expect(onlyStep(line).reactants[0].coefficient?.text).toBe(text);
+  });
+
+  it('reads labels with letters, digits, _, - and .', () => {
+    expect(onlyStep('R2a_b-c.1: O3 -> O2 + O(3P)').label).toEqual({ text: 'R2a_b-c.1', line: 1, column: 1 });
+  });
+
+  it('reads nested groups with counts in round and square brackets', () => {
+    const species = firstSpecies('[Pt(NH3)2Cl2]^2+ + (CH3)3COH -> X');
+    expect(species.formulaText).toBe('[Pt(NH3)2Cl2]');
+    expect(species.formula[0]).toMatchObject({ kind: 'group', bracket: '[' });
+    expect(species.charge?.text).toBe('^2+');
+  });
+
+  it.each([['O(1D)'], ['O(3P)'], ['O2(a1Δg)'], ['N2(v)'], ['Br2(g)'], ['Cl(aq)^-']])('reads the state tag in %s', (written) => {
+    const species = firstSpecies(`${written} -> X`);
+    expect(species.states).toHaveLength(1);
+  });
+
+  it.each([
+    ['Br•', 1, 0, 0],
+    ['Br.', 1, 0, 0],
+    ['O••', 2, 0, 0],
+    ['Fe^3+', 0, 3, 0],
+    ['SO4^2-', 0, -2, 0],
+    ['CO*', 0, 0, 1],
+    ['O2*2', 0, 0, 2],
+    ['OH•^-*', 1, -1, 1],
+  ])('reads the marks of %s', (written, radicalMarks, charge, sites) => {
+    const species = firstSpecies(`${written} -> X`);
+    expect(species.radicalMarks).toBe(radicalMarks);
+    expect(species.sites).toBe(sites);
+    const chargeText = species.charge?.text ?? '';
+    const sign = chargeText.endsWith('-') ? -1 : 1;
+    expect(chargeText === '' ? 0 : sign * Number(chargeText.slice(1, -1) || 1)).toBe(charge);
+  });
+
+  it.each([
+    ['hν', 'photon'],
+    ['hv', 'photon'],
+    ['M', 'third-body'],
+    ['*', 'site'],
+    ['e^-', 'electron'],
+  ])('reads the reserved word %s', (word, kind) => {
+    expect(onlyStep(`${word} + X -> Y`).reactants[0].particle.kind).toBe(kind);
+  });
+
+  it('keeps Mg and Mn as formulas, not the third body', () => {
+    expect(onlyStep('Mg + Mn -> MgMn').reactants.map((term) => term.particle.kind)).toEqual(['species', 'species']);
+  });
+
+  it('reads one rate expression, or two for a reversible step, and stops at a comment', () => {
+    expect(onlyStep('A1: O3 -> O2 + O(3P) @ 1.7e-11 * exp(-800 / T)   # note').rate).toMatchObject({ forward: '1.7e-11 * exp(-800 / T)', reverse: null, column: 22 });
+    expect(onlyStep('N2O4 <=> 2 NO2 @ 1e6 | 2e9 * exp(-100/T)').rate).toMatchObject({ forward: '1e6', reverse: '2e9 * exp(-100/T)' });
+  });
+
+  it('ignores comments and blank lines', () => {
+    expect(parseMechanism('# only a comment\n\n   \n  # another').steps).toEqual([]);
+    expect(parseMechanism('# only a comment\n\n').diagnostics).toEqual([]);
+  });
+
+  it('reads every directive', () => {
+    const text = ['%title Salt-lake bromine', '%units conc = mol L^-1, time = s', '%conditions T = 275 K, P = 1 atm, M = 2.46e19', '%terminal O3, O2', '%intermediates Br•, *', '%species RO2 = C2H5O2•', '%species Enz'].join('\n');
+    const parsed = parseMechanism(text);
+    expect(parsed.diagnostics).toEqual([]);
+    expect(parsed.directives.map((d) => d.kind)).toEqual(['title', 'units', 'conditions', 'terminal', 'intermediates', 'declaration', 'declaration']);
+    expect(parsed.directives[2]).toMatchObject({ assignments: [{ key: { text: 'T' }, value: { text: '275 K' } }, { key: { text: 'P' } }, { key: { text: 'M' }, value: { text: '2.46e19' } }] });
+  });
+
+  it('gives the same tree for a line whether or not a line of the same shape came before', () => {
+    const alone = parseMechanism('Q7: Cl• + CH4 -> HCl + CH3• @ 7.1e-12').steps[0];
+    const afterOthers = parseMechanism('P1: Br• + O3 -> BrO• + O2 @ 1e-11\nQ7: Cl• + CH4 -> HCl + CH3• @ 7.1e-12').steps[1];
+    expect(JSON.parse(JSON.stringify(afterOthers).replaceAll('"line":2', '"line":1'))).toEqual(alone);
+    expect(afterOthers.reactants.map((t) => t.particle.kind === 'species' && t.particle.text)).toEqual(['Cl•', 'CH4']);
+  });
+});
+
+describe('parseMechanism: rejected notation', () => {
+  it.each([
+    ['a missing product side', 'O3 ->', 'syntax-error', 6],
+    ['a trailing plus', 'Cl + O3 -> ClO + O2 +', 'syntax-error', 22],
+    ['two arrows', 'A -> B -> C', 'syntax-error', 8],
+    ['an empty rate', 'A -> B @', 'syntax-error', 9],
+    ['a stray character', 'Br $ O -> X', 'syntax-error', 4],
+    ['a blank inside a species', 'C H3 + O -> X', 'syntax-error', 2],
+    ['two charges', 'Fe^2+^+ -> X', 'syntax-error', 6],
+    ['two adsorbed marks', 'CO** -> X', 'syntax-error', 4],
+    ['an unclosed bracket', '(CH3 + OH -> X', 'unbalanced-brackets', 1],
+    ['a stray closing bracket', 'CH3) + OH -> X', 'unbalanced-brackets', 4],
+    ['a crossed bracket', '[Pt(NH3]) -> X', 'unbalanced-brackets', 8],
+    ['an unknown directive', '%colour blue', 'unknown-directive', 1],
+    ['a label without a step', 'R1:', 'syntax-error', 4],
+    ['M inside a formula group', '(M)2 -> X', 'syntax-error', 2],
+  ])('reports %s', (_name, line, code, column) => {
+    const { diagnostics } = parseMechanism(line);
+    expect(diagnostics[0]).toMatchObject({ severity: 'error', line: 1, column, code });
+    expect(diagnostics[0].message.length).toBeGreaterThan(10);
+    expect(diagnostics[0].found).toBeTruthy();
+  });
+
+  it('says what it expected at a syntax error', () => {
+    const [error] = parseMechanism('A + -> B').diagnostics;
+    expect(error).toMatchObject({ column: 5, found: '->' });
+    expect(error.expected).toEqual(expect.arrayContaining(['a formula or declared name', 'hν', 'M', "'*'"]));
+  });
+
+  it('reports a line that is too long without reading it', () => {
+    const [error] = parseMechanism(`A -> B @ ${'1+'.repeat(2_000)}1`).diagnostics;
+    expect(error).toMatchObject({ code: 'line-too-long', line: 1 });
+  });
+
+  it('reports a text that is too large and reads none of it', () => {
+    const parsed = parseMechanism('A -> B\n'.repeat(1_200_000));
+    expect(parsed.steps).toEqual([]);
+    expect(parsed.diagnostics).toEqual([expect.objectContaining({ code: 'input-too-large', line: 1, column: 1 })]);
+  });
+});
+
+describe('parseMechanism: error recovery', () => {
+  it('reports every faulty line in one pass and keeps the good ones', () => {
+    const text = ['B1: Br• + O3 -> BrO• + O2', 'B2: BrO• + -> Br•', 'B3: BrO• + hν -> Br• + O(3P)', 'B4: (O -> O2', '%nope', 'B5: Br2 + hν -> 2 Br•'].join('\r\n');
+    const parsed = parseMechanism(text);
+    expect(parsed.steps.map((step) => step.label?.text)).toEqual(['B1', 'B3', 'B5']);
+    expect(parsed.diagnostics.map((d) => [d.line, d.code])).toEqual([[2, 'syntax-error'], [4, 'unbalanced-brackets'], [5, 'unknown-directive']]);
+  });
+});

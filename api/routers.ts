@@ -2,6 +2,7 @@ import type { Router } from 'express';
 import type { Knex } from 'knex';
 import { analysisRoutes } from './analysis/analysis.routes';
 import { attachmentsRoutes, mechanismAttachmentsRoutes } from './attachments/attachments.routes';
+import { catalogueRoutes } from './catalogue/catalogue.routes';
 import { comparisonRoutes } from './comparison/comparison.routes';
 import type { CapturedMail } from './mail/fake-smtp';
 import { inboxRoutes } from './mail/inbox.routes';
@@ -43,6 +44,7 @@ export function apiRouters(deps: FeatureDeps): Array<[string, Router]> {
     ['/api/attachments', attachmentsRoutes(db)],
     ['/api/notifications', notificationsRoutes(db)],
     ['/api/queues', queuesRoutes(db)],
+    ['/api/catalogue', catalogueRoutes(db)],
     ['/api/dev', inboxRoutes(deps.devInbox ?? null)],
   ];
 }

@@ -1,13 +1,15 @@
 import type { Knex } from 'knex';
+import { catalogueLookup } from '../catalogue/catalogue.service';
 import { analyseMechanism } from '../chemistry/analyse';
-import { builtinEnthalpy, type EnthalpyLookup } from '../chemistry/thermo';
+import { builtinEnthalpy, chainLookups, type EnthalpyLookup } from '../chemistry/thermo';
 
 /**
- * The enthalpy source for analyses: the built-in table for now; the curated species catalogue is
- * put in front of it when it exists, so a curator's edit changes later analyses.
+ * The enthalpy source for every analysis: the curated species catalogue in front of the built-in
+ * table, read afresh each time, so a curator's edit changes later analyses (each step records the
+ * values it used in `usedEnthalpies`).
  */
-export async function enthalpySource(_db: Knex): Promise<EnthalpyLookup> {
-  return builtinEnthalpy;
+export async function enthalpySource(db: Knex | Knex.Transaction): Promise<EnthalpyLookup> {
+  return chainLookups(await catalogueLookup(db), builtinEnthalpy);
 }
 
 /** Analyses unsaved text for the workbench: the same engine and JSON as the `check` command. */

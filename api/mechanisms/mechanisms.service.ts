@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { enthalpySource } from '../analysis/analysis.service';
 import * as audit from '../audit/audit.queries';
 import { AppError, ConflictError } from '../errors';
 import { analyseSource } from '../revisions/analyse-source';
@@ -14,7 +15,7 @@ const slugFromTitle = (title: string) =>
 
 /** A new mechanism owned by the author, with its first revision r1. */
 export async function createMechanism(db: Knex, viewer: Viewer, input: CreateMechanismBody) {
-  const analysed = analyseSource(input.source);
+  const analysed = analyseSource(input.source, await enthalpySource(db));
   const slug = input.slug ?? slugFromTitle(input.title);
   await db.transaction(async (trx) => {
     if (await mechanisms.findBySlug(trx, slug)) {

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { enthalpySource } from '../analysis/analysis.service';
 import { ConflictError, NotFoundError } from '../errors';
 import { assertEditor, loadVisible, type Viewer } from '../mechanisms/access';
 import * as mechanisms from '../mechanisms/mechanisms.queries';
@@ -15,7 +16,7 @@ import { presentRevision, storeRevision } from './store-revision';
  * submission, so neither text is lost and the author can rebase.
  */
 export async function addRevision(db: Knex, viewer: Viewer, slug: string, input: CreateRevisionBody) {
-  const analysed = analyseSource(input.source);
+  const analysed = analyseSource(input.source, await enthalpySource(db));
   const outcome = await db.transaction(async (trx) => {
     const { mechanism, access } = await loadVisible(trx, slug, viewer);
     assertEditor(access);

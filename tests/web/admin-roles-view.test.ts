@@ -83,6 +83,14 @@ describe('AdminRolesView', () => {
     expect(vi.mocked(auth.fetchSession).mock.calls.length).toBe(sessionLoadsBefore + 1);
   });
 
+  it("does not offer admins their own admin box, which the server would refuse", async () => {
+    const { wrapper } = await openRolesPage();
+    const ownAdmin = wrapper.get('#role-1-admin');
+    expect(ownAdmin.attributes('disabled')).toBeDefined();
+    expect(ownAdmin.attributes('aria-describedby')).toBe('own-admin-note');
+    expect(wrapper.get('#role-2-admin').attributes('disabled')).toBeUndefined();
+  });
+
   it('shows an error with a retry when the accounts cannot be loaded', async () => {
     vi.mocked(admin.listUsers).mockRejectedValueOnce(new ApiError(0, 'NETWORK_ERROR', 'The server could not be reached.'));
     const { wrapper } = await openRolesPage();

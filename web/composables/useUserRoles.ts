@@ -44,6 +44,11 @@ export function useUserRoles() {
     drafts[userId] = ROLES.filter((known) => known === role ? granted : others.includes(known));
   }
 
+  /** The server refuses to let admins drop their own admin role, so the box is not offered. */
+  function isLocked(userId: number, role: Role): boolean {
+    return role === 'admin' && userId === session.user?.id;
+  }
+
   function isDirty(user: User): boolean {
     return !sameRoles(user.roles, draftOf(user.id));
   }
@@ -71,5 +76,5 @@ export function useUserRoles() {
     }
   }
 
-  return { users, pending, error, savingId, saveErrors, load, draftOf, toggle, isDirty, reset, save };
+  return { users, pending, error, savingId, saveErrors, load, draftOf, toggle, isLocked, isDirty, reset, save };
 }

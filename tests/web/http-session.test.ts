@@ -42,6 +42,19 @@ describe('http client wired to the session', () => {
     expect((init.headers as Record<string, string>)['X-CSRF-Token']).toBe('csrf-from-session');
   });
 
+  it('on a rejected CSRF token fetches a fresh one, so trying again is sent with it', async () => {
+    serverAnswering(() => jsonResponse(403, { error: { code: 'CSRF_INVALID', message: 'Stale token' } }));
+    const { session } = await appAt('/account');
+    fetchMock.mockImplementation(async (input) =>
+      input === '/api/session'
+        ? jsonResponse(200, { user: demoUser(['author']), csrfToken: 'renewed' })
+        : jsonResponse(403, { error: { code: 'CSRF_INVALID', message: 'Stale token' } }),
+    );
+    await expect(http.post('/api/anything')).rejects.toMatchObject({ code: 'CSRF_INVALID' });
+    await vi.waitFor(() => expect(session.csrfToken).toBe('renewed'));
+    expect(session.isSignedIn).toBe(true);
+  });
+
   it('on a 401 clears the session and goes to sign-in, keeping where the person was', async () => {
     serverAnswering(() => jsonResponse(401, { error: { code: 'UNAUTHENTICATED', message: 'Sign in first' } }));
     const { router, session } = await appAt('/account?tab=roles');

@@ -3,6 +3,7 @@ import { ApiError, configureHttp, http, NETWORK_ERROR } from '@web/services/http
 
 const fetchMock = vi.fn<typeof fetch>();
 const onUnauthorized = vi.fn();
+const onCsrfRejected = vi.fn();
 
 function jsonResponse(status: number, body: unknown): Response {
   return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
@@ -14,13 +15,14 @@ function sentInit(call = 0): RequestInit {
 
 beforeEach(() => {
   vi.stubGlobal('fetch', fetchMock);
-  configureHttp({ csrfToken: () => 'token-abc', onUnauthorized });
+  configureHttp({ csrfToken: () => 'token-abc', onUnauthorized, onCsrfRejected });
 });
 
 afterEach(() => {
   vi.unstubAllGlobals();
   fetchMock.mockReset();
   onUnauthorized.mockReset();
+  onCsrfRejected.mockReset();
 });
 
 describe('http client requests', () => {
@@ -103,9 +105,17 @@ describe('http client errors', () => {
     expect(onUnauthorized).not.toHaveBeenCalled();
   });
 
-  it('does not call the unauthorized handler for a 403', async () => {
+  it('reports a rejected CSRF token (not as a lost session) and still rejects', async () => {
     fetchMock.mockResolvedValue(jsonResponse(403, { error: { code: 'CSRF_INVALID', message: 'Reload the page' } }));
     await expect(http.put('/api/admin/users/1/roles', { roles: [] })).rejects.toMatchObject({ status: 403, code: 'CSRF_INVALID' });
+    expect(onCsrfRejected).toHaveBeenCalledTimes(1);
+    expect(onUnauthorized).not.toHaveBeenCalled();
+  });
+
+  it('leaves other 403s to the caller', async () => {
+    fetchMock.mockResolvedValue(jsonResponse(403, { error: { code: 'FORBIDDEN', message: 'Admins only' } }));
+    await expect(http.get('/api/admin/users')).rejects.toMatchObject({ status: 403, code: 'FORBIDDEN' });
+    expect(onCsrfRejected).not.toHaveBeenCalled();
     expect(onUnauthorized).not.toHaveBeenCalled();
   });
 });

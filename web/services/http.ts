@@ -18,9 +18,13 @@ export class ApiError extends Error {
 export interface HttpHooks {
   csrfToken: () => string;
   onUnauthorized: (error: ApiError) => void;
+  /** The token went stale (the session changed in another tab): fetch a fresh one for the retry. */
+  onCsrfRejected: (error: ApiError) => void;
 }
 
-let hooks: HttpHooks = { csrfToken: () => '', onUnauthorized: () => {} };
+let hooks: HttpHooks = { csrfToken: () => '', onUnauthorized: () => {}, onCsrfRejected: () => {} };
+
+export const CSRF_INVALID = 'CSRF_INVALID';
 
 export function configureHttp(next: Partial<HttpHooks>): void {
   hooks = { ...hooks, ...next };
@@ -42,6 +46,7 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
   if (response.ok) return readSuccess<T>(response);
   const error = await readError(response);
   if (error.status === 401 && options.handleUnauthorized !== false) hooks.onUnauthorized(error);
+  if (error.status === 403 && error.code === CSRF_INVALID) hooks.onCsrfRejected(error);
   throw error;
 }
 

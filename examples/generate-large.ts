@@ -24,11 +24,20 @@ function chainSteps(n: number): string[] {
   return steps;
 }
 
+/** The fewest chains whose template and recombination steps reach `steps`. */
+function chainsNeeded(steps: number): number {
+  let chains = 1;
+  while (6 * chains - 1 + (chains * (chains + 1)) / 2 < steps) chains += 1;
+  return chains;
+}
+
 /**
- * A balanced mechanism of exactly `steps` labelled steps over `chains` alkyl chains. The default
- * gives about one species per four steps, as in large published mechanisms (common practice).
+ * A balanced mechanism of exactly `steps` labelled steps over `chains` alkyl chains (more when
+ * that many cannot give enough steps). The default gives about one species per four steps, as in
+ * large published mechanisms (common practice).
  */
-export function generateMechanism(steps: number, chains = Math.max(2, Math.ceil(steps / 25))): string {
+export function generateMechanism(steps: number, requestedChains = Math.ceil(steps / 25)): string {
+  const chains = Math.max(requestedChains, chainsNeeded(steps));
   const lines = [`%title Generated alkyl-peroxy mechanism (${steps} steps)`, '%conditions T = 298 K, P = 1 atm'];
   const body: string[] = [];
   for (let n = 1; n <= chains && body.length < steps; n += 1) body.push(...chainSteps(n));

@@ -66,6 +66,9 @@ export interface RouteJson {
   aside: Record<string, number>;
   kind: 'productive' | 'null-cycle';
   dH: number | null;
+  /** Σ σ ΔH of the steps and ΔH of the net reaction: Hess's law says they agree when both are known. */
+  dHFromSteps: number | null;
+  dHFromNet: number | null;
   direct: boolean;
   basis: boolean;
 }

@@ -42,7 +42,6 @@ export const DIAGNOSTIC_CODES = {
   'direct-routes-limit': { severity: 'warning', meaning: 'direct-route enumeration stopped at its work limit' },
   'no-productive-route': { severity: 'info', meaning: 'the routes are null cycles only' },
   'enthalpy-missing': { severity: 'info', meaning: 'species without an enthalpy of formation' },
-  'hess-mismatch': { severity: 'error', meaning: 'a route enthalpy differs from that of its net reaction' },
 } as const satisfies Record<string, CodeInfo>;
 
 export type DiagnosticCode = keyof typeof DIAGNOSTIC_CODES;

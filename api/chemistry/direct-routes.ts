@@ -2,7 +2,9 @@ import { gcd } from './fraction';
 import type { SparseRow } from './integer-matrix';
 
 /** Rows of the enumeration tableau above this count stop the enumeration (bounded work). */
-export const DIRECT_ROUTE_ROW_LIMIT = 20_000;
+export const DIRECT_ROUTE_ROW_LIMIT = 5_000;
+/** Support comparisons above this count stop it too: the elementarity test is the costly part. */
+export const DIRECT_ROUTE_WORK_LIMIT = 20_000_000;
 
 interface TableauRow {
   /** Balance of each intermediate, for the part not processed yet. */
@@ -58,12 +60,14 @@ function elementary(union: bigint, rows: readonly TableauRow[], p: TableauRow, q
   return true;
 }
 
-function processIntermediate(rows: TableauRow[], k: number): TableauRow[] | null {
+function processIntermediate(rows: TableauRow[], k: number, budget: { work: number }): TableauRow[] | null {
   const next = rows.filter((row) => row.values[k] === 0n);
   const positive = rows.filter((row) => row.values[k] > 0n);
   const negative = rows.filter((row) => row.values[k] < 0n);
   for (const p of positive) {
     for (const q of negative) {
+      budget.work += rows.length;
+      if (budget.work > DIRECT_ROUTE_WORK_LIMIT) return null;
       const union = p.support | q.support;
       if (elementary(union, rows, p, q)) next.push(combine(p, q, k));
       if (next.length > DIRECT_ROUTE_ROW_LIMIT) return null;
@@ -90,8 +94,9 @@ function toRoute(row: TableauRow, directions: readonly Direction[], stepCount: n
 export function directRoutes(intermediateRows: readonly SparseRow[], reversible: readonly boolean[]): DirectRoutes {
   const directions = directionsOf(reversible);
   let rows = initialRows(intermediateRows, directions);
+  const budget = { work: 0 };
   for (let k = 0; k < intermediateRows.length; k += 1) {
-    const next = processIntermediate(rows, k);
+    const next = processIntermediate(rows, k, budget);
     if (!next) return { routes: [], complete: false };
     rows = next;
   }

@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import { DIAGNOSTIC_CODES, type DiagnosticCode } from '@api/chemistry/diagnostic-codes';
+import { generateMechanism } from '../../examples/generate-large';
+
+/** Thirty steps with three parallel ways from each carbon cluster to the next: 3^10 direct routes. */
+function explodingMechanism(): string {
+  const lines: string[] = [];
+  for (let i = 1; i <= 10; i += 1) for (let j = 1; j <= 3; j += 1) lines.push(`C${i} -> C${i + 1} + H${j}`);
+  return lines.join('\n');
+}
+
+// One text per code, each the smallest mechanism that shows the problem; the line and column
+// say where the diagnostic must point.
+const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: number; column?: number }> = {
+  'syntax-error': { text: 'A + -> B', line: 1, column: 5 },
+  'unbalanced-brackets': { text: '(CH3 + OH• -> CH3OH', line: 1, column: 1 },
+  'unknown-directive': { text: '%colour blue', line: 1, column: 1 },
+  'input-too-large': { text: () => 'O3 -> O2 + O(3P)\n'.repeat(500_000), line: 1, column: 1 },
+  'line-too-long': { text: () => `O3 -> O2 + O(3P) @ ${'1+'.repeat(1_500)}1`, line: 1 },
+  'bad-directive': { text: '%conditions T = hot', line: 1, column: 17 },
+  'unknown-element': { text: 'O3 + Xx -> XxO + O2', line: 1, column: 6 },
+  'bad-count': { text: 'C0H4 + O3 -> CO2 + H2O', line: 1, column: 2 },
+  'undeclared-name': { text: 'Enz + O2 -> EnzO2', line: 1, column: 1 },
+  'bad-declaration': { text: '%species CO = CO', line: 1, column: 10 },
+  'opaque-species': { text: '%species Enz\nEnz + O2 -> Enz + O2', line: 2, column: 1 },
+  'unused-directive-species': { text: '%terminal N2\nO3 + hν -> O2 + O(3P)', line: 1, column: 11 },
+  'element-imbalance': { text: 'X1: 2 O3 -> 2 O2', line: 1, column: 1 },
+  'charge-imbalance': { text: 'Fe^3+ + e^- -> Fe^+', line: 1, column: 1 },
+  'site-imbalance': { text: 'CO + * -> CO*2', line: 1, column: 1 },
+  'photon-on-product-side': { text: 'O3 + hν -> O2 + O(3P) + hν', line: 1, column: 25 },
+  'third-body-unpaired': { text: 'O(3P) + O2 + M -> O3', line: 1, column: 1 },
+  'molecularity-above-three': { text: 'H• + H• + H• + H• -> 2 H2', line: 1, column: 1 },
+  'not-elementary': { text: '1/2 O2 + CO -> CO2', line: 1, column: 1 },
+  'odd-electrons-unmarked': { text: 'NO + O3 -> NO2 + O2', line: 1, column: 1 },
+  'even-electrons-marked': { text: 'O• + O3 -> 2 O2', line: 1, column: 1 },
+  'step-class': { text: 'Br2 + hν -> 2 Br•', line: 1, column: 1 },
+  'duplicate-label': { text: 'R1: O3 + hν -> O2 + O(3P)\nR1: O2 + hν -> 2 O(3P)', line: 2, column: 1 },
+  'duplicate-step': { text: 'O3 + hν -> O2 + O(3P)\nO3 + hν -> O(3P) + O2', line: 2, column: 1 },
+  'suggested-fix': { text: '2 O3 -> 2 O2', line: 1, column: 1 },
+  'no-steps': { text: '# nothing yet', line: 1, column: 1 },
+  'routes-too-large': { text: () => generateMechanism(1_501), line: 3, column: 1 },
+  'direct-routes-skipped': { text: () => generateMechanism(41), line: 3, column: 1 },
+  'direct-routes-limit': { text: explodingMechanism, line: 1, column: 1 },
+  'no-productive-route': { text: '%intermediates O3, O2, O(3P)\nO3 + hν -> O2 + O(3P)\nO(3P) + O2 + M -> O3 + M', line: 2, column: 1 },
+  'enthalpy-missing': { text: 'CO + * -> CO*', line: 1, column: 1 },
+};
+
+describe('DIAGNOSTIC_CODES', () => {
+  it('are stable kebab-case names, each with a severity and a meaning', () => {
+    for (const [code, info] of Object.entries(DIAGNOSTIC_CODES)) {
+      expect(code).toMatch(/^[a-z]+(?:-[a-z]+)*$/);
+      expect(['error', 'warning', 'info']).toContain(info.severity);
+      expect(info.meaning.length).toBeGreaterThan(10);
+    }
+  });
+
+  it('each have a trigger below', () => {
+    expect(Object.keys(TRIGGERS).sort()).toEqual(Object.keys(DIAGNOSTIC_CODES).sort());
+  });
+
+  it.each(Object.keys(DIAGNOSTIC_CODES) as DiagnosticCode[])('%s is reported where the problem is, with its severity', (code) => {
+    const trigger = TRIGGERS[code];
+    const text = typeof trigger.text === 'function' ? trigger.text() : trigger.text;
+    const found = analyseMechanism(text).diagnostics.filter((item) => item.code === code);
+    expect(found.length).toBeGreaterThan(0);
+    expect(found[0]).toMatchObject({ severity: DIAGNOSTIC_CODES[code].severity, line: trigger.line, ...(trigger.column ? { column: trigger.column } : {}) });
+    expect(found[0].message).not.toBe('');
+  });
+});

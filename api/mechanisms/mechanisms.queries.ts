@@ -30,14 +30,16 @@ export async function findById(db: Db, id: number): Promise<MechanismRow | undef
   return db('mechanisms').where({ id }).first(COLUMNS);
 }
 
+/** The new id, or null when the slug is taken (also by a concurrent insert). */
 export async function insert(
   db: Db,
   values: { slug: string; title: string; summary: string; tags: string[]; visibility: string; ownerId: number },
-): Promise<number> {
-  const [row] = await db('mechanisms')
+): Promise<number | null> {
+  const rows = await db('mechanisms')
     .insert({ slug: values.slug, title: values.title, summary: values.summary, tags: values.tags, visibility: values.visibility, owner_id: values.ownerId })
+    .onConflict('slug').ignore()
     .returning('id');
-  return row.id;
+  return rows[0]?.id ?? null;
 }
 
 export async function update(

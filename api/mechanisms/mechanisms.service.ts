@@ -18,10 +18,8 @@ export async function createMechanism(db: Knex, viewer: Viewer, input: CreateMec
   const analysed = analyseSource(input.source, await enthalpySource(db));
   const slug = input.slug ?? slugFromTitle(input.title);
   await db.transaction(async (trx) => {
-    if (await mechanisms.findBySlug(trx, slug)) {
-      throw new ConflictError(`The address "${slug}" is taken; choose another slug`, { field: 'slug' });
-    }
     const id = await mechanisms.insert(trx, { ...input, slug, ownerId: viewer.id });
+    if (id === null) throw new ConflictError(`The address "${slug}" is taken; choose another slug`, { field: 'slug' });
     await audit.insert(trx, { actorId: viewer.id, action: 'mechanism.created', subjectType: 'mechanism', subjectId: id, details: { slug } });
     await mechanisms.advanceLatest(trx, id, 0);
     await storeRevision(trx, { mechanismId: id, number: 1, parentId: null, source: input.source, changeNote: input.changeNote, authorId: viewer.id }, analysed);

@@ -20,14 +20,17 @@ const COLUMNS = [
   'state', 'endorsements_needed as endorsementsNeeded', 'opened_by as openedBy', 'created_at as createdAt', 'closed_at as closedAt',
 ];
 
-export async function insert(db: Db, values: { mechanismId: number; revisionId: number; endorsementsNeeded: number; openedBy: number }): Promise<number> {
-  const [row] = await db('review_rounds')
+/** The new id, or null when the mechanism already has a round in progress (review_rounds_one_active). */
+export async function insert(db: Db, values: { mechanismId: number; revisionId: number; endorsementsNeeded: number; openedBy: number }): Promise<number | null> {
+  const rows = await db('review_rounds')
     .insert({
       mechanism_id: values.mechanismId, revision_id: values.revisionId, opened_revision_id: values.revisionId,
       endorsements_needed: values.endorsementsNeeded, opened_by: values.openedBy,
     })
+    .onConflict(db.raw("(mechanism_id) where state in ('open','revise-requested','endorsed')"))
+    .ignore()
     .returning('id');
-  return row.id;
+  return rows[0]?.id ?? null;
 }
 
 /** Locks the round row: state changes on one round are serialised. */

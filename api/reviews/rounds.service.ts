@@ -18,9 +18,11 @@ export async function openRound(db: Knex, viewer: Viewer, slug: string, revision
     const number = revisionNumber ?? mechanism.latestRevisionNumber;
     const revision = await revisions.findByNumber(trx, mechanism.id, number);
     if (!revision) throw new NotFoundError('revision', `r${number}`);
-    const active = await rounds.findActiveForMechanism(trx, mechanism.id);
-    if (active) throw new InvalidStateError('A review round is already in progress for this mechanism', { roundId: active.id });
     const id = await rounds.insert(trx, { mechanismId: mechanism.id, revisionId: revision.id, endorsementsNeeded, openedBy: viewer.id });
+    if (id === null) {
+      const active = await rounds.findActiveForMechanism(trx, mechanism.id);
+      throw new InvalidStateError('A review round is already in progress for this mechanism', { roundId: active?.id });
+    }
     await audit.insert(trx, { actorId: viewer.id, action: 'round.opened', subjectType: 'review_round', subjectId: id, details: { mechanism: mechanism.slug, revision: number } });
     return id;
   });

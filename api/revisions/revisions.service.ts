@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { enthalpySource } from '../analysis/analysis.service';
+import * as audit from '../audit/audit.queries';
 import { ConflictError, NotFoundError } from '../errors';
 import { assertEditor, loadVisible, type Viewer } from '../mechanisms/access';
 import * as mechanisms from '../mechanisms/mechanisms.queries';
@@ -37,9 +38,16 @@ async function rejectStale(db: Knex, viewer: Viewer, mechanism: MechanismRow, in
   const current = (await mechanisms.findById(db, mechanism.id))!;
   if (input.base > current.latestRevisionNumber) return new NotFoundError('revision', `r${input.base}`);
   const latest = (await revisions.findByNumber(db, mechanism.id, current.latestRevisionNumber))!;
-  const rejectedId = await revisions.insertRejected(db, {
-    mechanismId: mechanism.id, baseNumber: input.base, latestNumber: latest.number,
-    source: input.source, changeNote: input.changeNote, authorId: viewer.id,
+  const rejectedId = await db.transaction(async (trx) => {
+    const id = await revisions.insertRejected(trx, {
+      mechanismId: mechanism.id, baseNumber: input.base, latestNumber: latest.number,
+      source: input.source, changeNote: input.changeNote, authorId: viewer.id,
+    });
+    await audit.insert(trx, {
+      actorId: viewer.id, action: 'revision.rejected-stale', subjectType: 'mechanism', subjectId: mechanism.id,
+      details: { rejectedSubmissionId: id, base: input.base, latest: latest.number },
+    });
+    return id;
   });
   return new ConflictError(`r${input.base} is no longer the latest revision (r${latest.number} is); rebase your text on it`, {
     latest: { number: latest.number, source: latest.source, changeNote: latest.changeNote, authorId: latest.authorId },

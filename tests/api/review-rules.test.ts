@@ -49,6 +49,18 @@ describe('POST /api/mechanisms/:slug/revisions', () => {
     const rejected = (await collaborator.get(`/api/mechanisms/${slug}/rejected-submissions`)).body;
     expect(rejected).toEqual([expect.objectContaining({ baseNumber: 1, latestNumber: 2, source: loserText })]);
     expect((await owner.get(`/api/mechanisms/${slug}/revisions`)).body.map((r: { number: number }) => r.number)).toEqual([1, 2]);
+    const audit = await t.db('audit_log').where({ subject_type: 'mechanism', action: 'revision.rejected-stale' }).pluck('details');
+    expect(audit).toEqual([{ rejectedSubmissionId: rejected[0].id, base: 1, latest: 2 }]);
+  });
+
+  it('lets only one of two racing requests take a slug or open a round', async () => {
+    const body = { title: 'Same address', source: BROMINE_R1 };
+    const created = await Promise.all([owner.post('/api/mechanisms', body), collaborator.post('/api/mechanisms', body)]);
+    expect(created.map((r) => r.status).sort()).toEqual([201, 409]);
+    const winner = created.find((r) => r.status === 201)!.body;
+    const client = winner.owner.id === t.ids.get(WHO.owner) ? owner : collaborator;
+    const opened = await Promise.all([1, 2].map(() => client.post(`/api/mechanisms/${winner.slug}/rounds`, {})));
+    expect(opened.map((r) => r.status).sort()).toEqual([201, 409]);
   });
 
   it('answers 404 for a base that does not exist and 400 without a base', async () => {

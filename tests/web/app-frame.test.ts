@@ -3,6 +3,7 @@ import { flushPromises } from '@vue/test-utils';
 import App from '@web/App.vue';
 import * as auth from '@web/services/auth';
 import { ApiError } from '@web/services/http';
+import { useSessionStore } from '@web/stores/session';
 import { demoUser, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
@@ -33,6 +34,21 @@ describe('the app frame', () => {
     const { wrapper } = await appAt('/');
     expect(wrapper.find('header.the-app-header').exists()).toBe(false);
     expect(wrapper.get('main h1').text()).toBe('Sign in');
+  });
+
+  it('shows progress while a navigation waits for the server', async () => {
+    vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(['author']), csrfToken: 't' });
+    const { wrapper, router, pinia } = await appAt('/');
+    let answer: (info: Awaited<ReturnType<typeof auth.fetchSession>>) => void = () => {};
+    vi.mocked(auth.fetchSession).mockReturnValue(new Promise((resolve) => (answer = resolve)));
+    useSessionStore(pinia).clear();
+    const arrival = router.push('/account');
+    await flushPromises();
+    expect(wrapper.find('[role="progressbar"]').exists()).toBe(true);
+    answer({ user: demoUser(['author']), csrfToken: 't' });
+    await arrival;
+    await flushPromises();
+    expect(wrapper.find('[role="progressbar"]').exists()).toBe(false);
   });
 
   it('says when the session cannot be checked, and tries again on request', async () => {

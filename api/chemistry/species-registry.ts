@@ -23,8 +23,11 @@ export class SpeciesRegistry {
     private readonly diagnostics: Diagnostic[],
   ) {}
 
-  /** The species for a written particle, or null (with diagnostics) when it cannot be read. */
-  resolve(node: ParticleNode): RegisteredSpecies | null {
+  /**
+   * The species for a written particle, or null (with diagnostics) when it cannot be read. It is
+   * not listed yet: `register` does that once the whole step could be read.
+   */
+  resolve(node: ParticleNode): SpeciesInfo | null {
     const text = node.kind === 'species' ? node.text : node.kind;
     let resolution = this.cache.get(text);
     if (!resolution) {
@@ -35,10 +38,11 @@ export class SpeciesRegistry {
       const position = { line: node.line, column: node.column + problem.column };
       this.diagnostics.push(finding(problem.code, position, problem.message, { found: problem.found }));
     }
-    return resolution.info ? this.register(resolution.info, node) : null;
+    return resolution.info;
   }
 
-  private register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
+  /** Lists a species (first place it was written wins) and returns the listed record. */
+  register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
     const known = this.byKey.get(info.key);
     if (known) return known;
     const registered = { ...info, firstLine: node.line, firstColumn: node.column };

@@ -2,6 +2,7 @@ import type { StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { Fraction } from './fraction';
+import type { SpeciesInfo } from './species-model';
 import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 
 /** One species on one side of a step, with equal terms merged (`A + A` is `2 A`). */
@@ -35,8 +36,14 @@ function readCoefficient(text: string): Fraction | null {
   return value;
 }
 
-function buildSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepTerm[] | null {
-  const merged = new Map<string, StepTerm>();
+interface ReadTerm {
+  species: SpeciesInfo;
+  coef: Fraction;
+  node: TermNode;
+}
+
+function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnostics: Diagnostic[]): ReadTerm[] | null {
+  const read: ReadTerm[] = [];
   let readable = true;
   for (const term of terms) {
     const species = registry.resolve(term.particle);
@@ -45,22 +52,30 @@ function buildSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagno
       const message = `coefficient ${term.coefficient.text} must be a positive number (integer, decimal or fraction)`;
       diagnostics.push(finding('bad-count', term.coefficient, message, { found: term.coefficient.text }));
     }
-    if (!species || !coef) {
-      readable = false;
-      continue;
-    }
+    if (!species || !coef) readable = false;
+    else read.push({ species, coef, node: term });
+  }
+  return readable ? read : null;
+}
+
+/** Lists the species of a readable side and merges equal terms (`A + A` is `2 A`). */
+function mergeSide(terms: readonly ReadTerm[], registry: SpeciesRegistry): StepTerm[] {
+  const merged = new Map<string, StepTerm>();
+  for (const { species, coef, node } of terms) {
     const known = merged.get(species.key);
     if (known) known.coef = known.coef.add(coef);
-    else merged.set(species.key, { species, coef });
+    else merged.set(species.key, { species: registry.register(species, node.particle), coef });
   }
-  return readable ? [...merged.values()] : null;
+  return [...merged.values()];
 }
 
 /** Builds the step model, or null (with diagnostics) when a species or coefficient cannot be read. */
 export function buildStep(node: StepNode, position: number, registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepModel | null {
-  const reactants = buildSide(node.reactants, registry, diagnostics);
-  const products = buildSide(node.products, registry, diagnostics);
-  if (!reactants || !products) return null;
+  const left = readSide(node.reactants, registry, diagnostics);
+  const right = readSide(node.products, registry, diagnostics);
+  if (!left || !right) return null;
+  const reactants = mergeSide(left, registry);
+  const products = mergeSide(right, registry);
   const label = node.label?.text ?? null;
   return { index: -1, id: label ?? `#${position}`, label, node, reversible: node.reversible, reactants, products };
 }

@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import { exampleText } from '../helpers/examples';
+
+// The intermediate choice of the analysis design, step 1, rule by rule.
+describe('choice of intermediates', () => {
+  it('takes the species formed and consumed, less %terminal ones', () => {
+    const analysis = analyseMechanism(exampleText('salt-lake-bromine.steps'));
+    expect(analysis.intermediates).toEqual(['Br•', 'BrO•', 'O(3P)']);
+    expect(analysis.terminalSpecies).toEqual(['O3', 'O2']);
+    expect(analysis.intermediatesExplanation).toContain('less the %terminal species O3, O2');
+  });
+
+  it('releases closed-shell neutral species one at a time, in order of first appearance', () => {
+    const analysis = analyseMechanism(exampleText('peroxy-lumped.steps'));
+    expect(analysis.intermediates).not.toContain('O2');
+    expect(analysis.intermediatesExplanation).toMatch(/O2 \(closed-shell, neutral, first met on line 8\) is released/);
+  });
+
+  it('falls back to the reactive species when no single release helps', () => {
+    const analysis = analyseMechanism(exampleText('hydrogen-bromine-chain.steps'));
+    expect(analysis.intermediates).toEqual(['Br•', 'H•']);
+    expect(analysis.intermediatesExplanation).toContain('only the reactive species');
+  });
+
+  it('follows %intermediates when given', () => {
+    const analysis = analyseMechanism(`%intermediates Br•\n${exampleText('hydrogen-bromine-chain.steps')}`);
+    expect(analysis.intermediates).toEqual(['Br•']);
+    expect(analysis.intermediatesExplanation).toContain('as declared with %intermediates');
+  });
+
+  it('routes of Chapman chemistry alone interconvert O2 and O3 once the excited atom is the only intermediate', () => {
+    // Chapman mechanism: Finlayson-Pitts & Pitts, ch. 12 (from memory).
+    const analysis = analyseMechanism('C1: O2 + hν -> 2 O(3P)\nC2: O(3P) + O2 + M -> O3 + M\nC3: O3 + hν -> O2 + O(3P)\nC4: O(3P) + O3 -> 2 O2');
+    expect(analysis.intermediates).toEqual(['O(3P)']);
+    expect(analysis.routes).toContainEqual(expect.objectContaining({ multipliers: { C1: 1, C2: 2 }, net: '3 O2 → 2 O3' }));
+  });
+});

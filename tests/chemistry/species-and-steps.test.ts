@@ -1,0 +1,91 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
+
+function species(text: string, key: string) {
+  return analyseMechanism(text).species.find((item) => item.key === key);
+}
+
+describe('species model', () => {
+  // Electron counts Σ Z − charge: N 7, O 8, Cl 17, Br 35, Fe 26 (IUPAC periodic table).
+  it.each([
+    ['NO', 15, true],
+    ['NO2', 23, true],
+    ['ClO', 25, true],
+    ['O3', 24, false],
+    ['Fe^3+', 23, true],
+    ['Cl^-', 18, false],
+    ['OH•', 9, true],
+  ])('%s has %i electrons (radical: %s)', (key, electrons, radical) => {
+    expect(species(`${key} + hν -> ${key}`, key)).toMatchObject({ electrons, radical });
+  });
+
+  it('writes keys in canonical form: formula, state, • marks, charge, *', () => {
+    const analysis = analyseMechanism('Br. + O(1D) + Fe^3+ + CO* + O2*2 -> Xe');
+    expect(analysis.species.map((item) => item.key)).toEqual(['Br•', 'O(1D)', 'Fe^3+', 'CO*', 'O2*2', 'Xe']);
+  });
+
+  it('treats a state-tagged even-electron species as reactive but not a radical; a marked one as a radical', () => {
+    expect(species('O(1D) + H2O -> 2 OH•', 'O(1D)')).toMatchObject({ radical: false, reactive: true });
+    expect(species('O(3P)• + O2 + M -> O3 + M', 'O(3P)•')).toMatchObject({ radical: true });
+  });
+
+  it('does not make a phase tag reactive', () => {
+    expect(species('Br2(g) + hν -> 2 Br•', 'Br2(g)')).toMatchObject({ reactive: false, radical: false });
+  });
+
+  it('balances a declared name like its formula, and says so', () => {
+    const analysis = analyseMechanism('%species RO2 = C2H5O2•\n%species RO = C2H5O•\nP1: RO2 + NO• -> RO + NO2•');
+    expect(analysis.steps[0].balanced).toBe(true);
+    expect(analysis.species[0]).toMatchObject({ key: 'RO2', name: 'RO2', formula: 'C2H5O2', radical: true, declared: true });
+  });
+
+  it('lists only the species of steps that could be read', () => {
+    expect(analyseMechanism('O3 + Xy -> O2').species).toEqual([]);
+  });
+
+  it('treats isomers written differently as different species', () => {
+    expect(analyseMechanism('CH3CHO -> C2H4O').species.map((item) => item.key)).toEqual(['CH3CHO', 'C2H4O']);
+  });
+});
+
+describe('step checks', () => {
+  // Radical classes: Atkins' Physical Chemistry, "Chain reactions" (from memory).
+  it.each([
+    ['Br2 + hν -> 2 Br•', 'initiation'],
+    ['Br• + H2 -> HBr + H•', 'propagation'],
+    ['H• + O2 -> OH• + O(3P)•', 'branching'],
+    ['Br• + Br• + M -> Br2 + M', 'termination'],
+    ['H2 + I2 -> 2 HI', 'non-radical'],
+  ])('%s is %s', (text, stepClass) => {
+    expect(analyseMechanism(text).steps[0].class).toBe(stepClass);
+  });
+
+  it('counts molecularity with M and without the photon, and flags lumped steps as not elementary', () => {
+    const [a, b, c] = analyseMechanism('O(3P) + O2 + M -> O3 + M\nO3 + hν -> O2 + O(3P)\nO3 -> 1.5 O2').steps;
+    expect([a.molecularity, a.elementary]).toEqual([3, true]);
+    expect([b.molecularity, b.photolysis]).toEqual([1, true]);
+    expect([c.elementary, c.balanced]).toEqual([false, true]);
+  });
+
+  it('writes A + A as 2 A and keeps exact fractions', () => {
+    const [step] = analyseMechanism('BrO• + BrO• -> 2 Br• + O2\n').steps;
+    expect(step.equation).toBe('2 BrO• → 2 Br• + O2');
+    expect(step.normalised).toBe('2 BrO• -> 2 Br• + 1 O2');
+    const [lumped] = analyseMechanism('1/3 O3 -> 1/2 O2').steps;
+    expect(lumped.reactants[0]).toEqual({ key: 'O3', coef: 1 / 3, coefText: '1/3' });
+  });
+
+  it('suggests the smallest whole-number change that balances a step', () => {
+    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.expected?.[0]);
+    expect(fixes('2 O3 -> 2 O2')).toEqual(['2 O3 → 3 O2']);
+    expect(fixes('H2O2 + I^- -> IO^-')).toEqual(['H2O2 + I^- → IO^- + H2O']);
+    expect(fixes('CO + * -> CO*2')).toEqual(['CO + 2 * → CO*2']);
+    expect(fixes('Fe^3+ -> Fe^2+')).toEqual(['Fe^3+ + e^- → Fe^2+']);
+    expect(fixes('C6H12O6 -> Xe')).toEqual([]);
+  });
+
+  it('matches a reversible step with its reverse as a duplicate', () => {
+    const analysis = analyseMechanism('A1: N2O4 <=> 2 NO2•\nA2: 2 NO2• <=> N2O4');
+    expect(analysis.diagnostics).toContainEqual(expect.objectContaining({ code: 'duplicate-step', line: 2 }));
+  });
+});

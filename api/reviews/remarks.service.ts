@@ -9,7 +9,7 @@ import { renderMarkdown } from './markdown';
 import { anchorOf, findStep, lineText } from './remark-anchor';
 import * as remarks from './remarks.queries';
 import type { RemarkBody } from './reviews.schemas';
-import { loadRound } from './round-context';
+import { findVisibleRound, loadRound } from './round-context';
 import { assertActive } from './round-state';
 import { nameOf } from './rounds.service';
 
@@ -40,10 +40,8 @@ export async function addRemark(db: Knex, viewer: Viewer, roundId: number, input
 }
 
 export async function listRemarks(db: Knex, viewer: Viewer, roundId: number) {
-  const list = await db.transaction(async (trx) => {
-    await loadRound(trx, viewer, roundId);
-    return remarks.listForRound(trx, roundId);
-  });
+  await findVisibleRound(db, viewer, roundId);
+  const list = await remarks.listForRound(db, roundId);
   const replies = await remarks.repliesFor(db, list.map((remark) => remark.id));
   return list.map((remark) => ({ ...remark, replies: replies.filter((reply) => reply.remarkId === remark.id) }));
 }

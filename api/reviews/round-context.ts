@@ -18,6 +18,14 @@ export async function loadRound(trx: Knex.Transaction, viewer: Viewer, roundId: 
   return { round, mechanism, access, assignedHere: reviewers.some((r) => r.id === viewer.id), reviewers };
 }
 
+/** A round to read (no lock) and its mechanism; 404 for a round the viewer may not see. */
+export async function findVisibleRound(db: Knex | Knex.Transaction, viewer: Viewer, roundId: number) {
+  const round = await rounds.findById(db, roundId);
+  if (!round) throw new NotFoundError('review round', roundId);
+  const { mechanism } = await loadVisibleById(db, round.mechanismId, viewer);
+  return { round, mechanism };
+}
+
 /** Moves a round to a new state and records who did it and why. */
 export async function changeState(
   trx: Knex.Transaction,

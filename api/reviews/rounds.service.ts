@@ -1,12 +1,12 @@
 import type { Knex } from 'knex';
 import * as audit from '../audit/audit.queries';
 import { AppError, InvalidStateError, NotFoundError } from '../errors';
-import { accessTo, assertEditor, canEdit, loadVisible, loadVisibleById, type Viewer } from '../mechanisms/access';
+import { accessTo, assertEditor, canEdit, loadVisible, type Viewer } from '../mechanisms/access';
 import * as mechanisms from '../mechanisms/mechanisms.queries';
 import { notify } from '../notifications/notify';
 import * as revisions from '../revisions/revisions.queries';
 import * as users from '../users/users.queries';
-import { changeState, loadRound } from './round-context';
+import { changeState, findVisibleRound, loadRound } from './round-context';
 import { assertActive, assertState } from './round-state';
 import * as rounds from './rounds.queries';
 
@@ -30,9 +30,7 @@ export async function openRound(db: Knex, viewer: Viewer, slug: string, revision
 }
 
 export async function getRound(db: Knex, viewer: Viewer, roundId: number) {
-  const round = await rounds.findById(db, roundId);
-  if (!round) throw new NotFoundError('review round', roundId);
-  const { mechanism } = await loadVisibleById(db, round.mechanismId, viewer);
+  const { round, mechanism } = await findVisibleRound(db, viewer, roundId);
   const [revision, reviewers, verdicts, timeline] = await Promise.all([
     revisions.findById(db, round.revisionId),
     rounds.reviewers(db, round.id),

@@ -4,6 +4,8 @@ import { analysisRoutes } from './analysis/analysis.routes';
 import { attachmentsRoutes, mechanismAttachmentsRoutes } from './attachments/attachments.routes';
 import { catalogueRoutes } from './catalogue/catalogue.routes';
 import { comparisonRoutes } from './comparison/comparison.routes';
+import { exportsRoutes, schemasRoutes } from './exports/exports.routes';
+import { importsRoutes } from './imports/imports.routes';
 import type { CapturedMail } from './mail/fake-smtp';
 import { inboxRoutes } from './mail/inbox.routes';
 import type { MailTransport } from './mail/mail-transport';
@@ -14,6 +16,9 @@ import { queuesRoutes } from './queues/queues.routes';
 import { remarksRoutes } from './reviews/remarks.routes';
 import { mechanismRoundsRoutes, roundsRoutes } from './reviews/rounds.routes';
 import { revisionsRoutes } from './revisions/revisions.routes';
+import type { JobQueue } from './jobs/job-queue';
+import { simulationRoutes } from './simulations/simulations.routes';
+import { setsRoutes } from './sets/sets.routes';
 
 /** What feature routers need besides the database (mail, job queue…), filled in as features arrive. */
 export interface FeatureDeps {
@@ -24,8 +29,12 @@ export interface FeatureDeps {
   devInbox?: CapturedMail[] | null;
   /** Endorsements a review round needs before it can be adopted (default 2). */
   endorsementsNeeded?: number;
+  /** The simulation job queue; absent where it does not run (simulations then answer 503). */
+  jobs?: JobQueue;
   /** Largest attachment in bytes (default 10 MB). */
   maxAttachmentBytes?: number;
+  /** Largest file in an import upload in bytes (default 1 MB). */
+  maxImportBytes?: number;
 }
 
 /** Every feature's router with its mount path: the one list app.ts mounts. */
@@ -39,12 +48,17 @@ export function apiRouters(deps: FeatureDeps): Array<[string, Router]> {
     ['/api/mechanisms', comparisonRoutes(db)],
     ['/api/mechanisms', mechanismRoundsRoutes(db, { endorsementsNeeded: deps.endorsementsNeeded ?? 2 })],
     ['/api/mechanisms', mechanismAttachmentsRoutes(db, deps.maxAttachmentBytes ?? 10 * 1024 * 1024)],
+    ['/api/simulations', simulationRoutes(db, deps.jobs)],
     ['/api/rounds', roundsRoutes(db)],
     ['/api/remarks', remarksRoutes(db)],
     ['/api/attachments', attachmentsRoutes(db)],
     ['/api/notifications', notificationsRoutes(db)],
     ['/api/queues', queuesRoutes(db)],
     ['/api/catalogue', catalogueRoutes(db)],
+    ['/api/sets', setsRoutes(db)],
+    ['/api/exports', exportsRoutes(db)],
+    ['/api/schemas', schemasRoutes()],
+    ['/api/imports', importsRoutes(db, deps.maxImportBytes ?? 1024 * 1024)],
     ['/api/dev', inboxRoutes(deps.devInbox ?? null)],
   ];
 }

@@ -6,3 +6,9 @@ if [ ! -x /usr/bin/chromium ]; then
   apt-get update -qq
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends chromium fonts-liberation >/dev/null
 fi
+# Debian's poppler-utils: pdftotext and pdffonts read the PDF worksheets back in the export tests.
+if ! command -v pdftotext >/dev/null || ! command -v pdffonts >/dev/null; then
+  echo "Installing Debian's poppler-utils…"
+  apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends poppler-utils >/dev/null
+fi

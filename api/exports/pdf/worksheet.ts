@@ -1,0 +1,85 @@
+import PDFDocument from 'pdfkit';
+import type { ExportDocument, MechanismExport } from '../exports.schemas';
+import { formatKj, formatNm, multipliersText, rateText, yesNo } from '../number-format';
+import { drawNetwork } from './network-picture';
+import { PDF_FONTS } from './pdf-fonts';
+import { contentWidth, ensureRoom, heading, paragraph, writeWithSymbols } from './pdf-text';
+
+type Doc = InstanceType<typeof PDFDocument>;
+
+const PICTURE_HEIGHT = 260;
+
+function stepLines(doc: Doc, mechanism: MechanismExport): void {
+  const left = doc.page.margins.left;
+  for (const step of mechanism.steps) {
+    ensureRoom(doc, 30);
+    const y = doc.y;
+    doc.font('bold').fontSize(10).text(step.id, left, y, { width: 48, lineBreak: false });
+    writeWithSymbols(doc, step.equation, left + 52, y, { width: contentWidth(doc) - 52 });
+    const rate = rateText(step);
+    if (rate) doc.font('text').fontSize(8).fillColor('#4b5563').text(`k = ${rate}`, left + 52, doc.y, { width: contentWidth(doc) - 52 });
+    doc.fillColor('#000000').moveDown(0.3);
+  }
+}
+
+function networkSection(doc: Doc, mechanism: MechanismExport): void {
+  ensureRoom(doc, PICTURE_HEIGHT + 30);
+  heading(doc, 'Network: species in circles, steps in squares', 11);
+  drawNetwork(doc, mechanism.steps, { x: doc.page.margins.left, y: doc.y, width: contentWidth(doc), height: PICTURE_HEIGHT });
+  doc.x = doc.page.margins.left;
+  doc.y += PICTURE_HEIGHT + 10;
+}
+
+function answerKeySection(doc: Doc, mechanism: MechanismExport): void {
+  const answers = mechanism.answers!;
+  heading(doc, `Answer key — ${mechanism.title}`, 13);
+  mechanism.steps.forEach((step, index) => {
+    const answer = answers.steps[index];
+    ensureRoom(doc, 16);
+    paragraph(doc, `${step.id}: ${answer.class}; balanced ${yesNo(answer.balanced)}; ΔH = ${formatKj(answer.dH)} kJ/mol; threshold ${answer.thresholdNm === null ? 'none' : `${formatNm(answer.thresholdNm)} nm`}`, 9);
+  });
+  answers.routes.forEach((route, index) => {
+    ensureRoom(doc, 30);
+    const tag = answers.overall === index ? ' (overall)' : route.kind === 'null-cycle' ? ' (null cycle)' : '';
+    paragraph(doc, `Route ${index + 1}${tag}: ${multipliersText(route.multipliers)}`, 9);
+    paragraph(doc, `Net: ${route.net}    ΔH = ${formatKj(route.dH)} kJ/mol`, 9);
+  });
+  const list = (keys: string[]) => (keys.length > 0 ? keys.join(', ') : 'none');
+  paragraph(doc, `Catalysts: ${list(answers.catalysts)}. Intermediates: ${list(answers.intermediates)}.`, 9);
+  doc.moveDown(0.5);
+}
+
+function mechanismPages(doc: Doc, mechanism: MechanismExport, index: number): void {
+  if (index > 0) doc.addPage();
+  heading(doc, `${index + 1}. ${mechanism.title} (r${mechanism.revision})`, 14);
+  if (mechanism.note) paragraph(doc, mechanism.note);
+  heading(doc, 'Steps', 11);
+  stepLines(doc, mechanism);
+  networkSection(doc, mechanism);
+  ensureRoom(doc, 60);
+  paragraph(doc, 'Find the routes and their stoichiometric numbers, the net reactions, the catalysts and intermediates, ΔH of each step and the photolysis thresholds.', 9);
+}
+
+/**
+ * A printable worksheet: per mechanism its steps and network picture; with the answer key, pages
+ * at the end with classes, ΔH, thresholds, routes, catalysts and intermediates. Noto Sans embedded.
+ */
+export function renderWorksheet(exported: ExportDocument): Promise<Buffer> {
+  const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: exported.set?.title ?? exported.mechanisms[0].title, Creator: 'Cyclewright' } });
+  for (const [name, file] of Object.entries(PDF_FONTS)) doc.registerFont(name, file);
+  const chunks: Buffer[] = [];
+  doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+  heading(doc, `${exported.set?.title ?? exported.mechanisms[0].title}${exported.answerKey ? ' — with answer key' : ''}`, 18);
+  if (exported.set?.audience) paragraph(doc, `Audience: ${exported.set.audience}`);
+  exported.mechanisms.forEach((mechanism, index) => mechanismPages(doc, mechanism, index));
+  if (exported.answerKey) {
+    doc.addPage();
+    for (const mechanism of exported.mechanisms) answerKeySection(doc, mechanism);
+  }
+  doc.end();
+  return done;
+}

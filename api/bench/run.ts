@@ -7,6 +7,7 @@ import type { BenchRow, BenchSuite } from './types';
 const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   engine: () => import('./engine'),
   kinetics: () => import('./kinetics'),
+  repository: () => import('./repository'),
 };
 
 function format(row: BenchRow): string {

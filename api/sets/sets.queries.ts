@@ -24,6 +24,10 @@ export async function findById(db: Db, id: number): Promise<SetRow | undefined> 
   return db('mechanism_sets').where({ id }).first(COLUMNS);
 }
 
+export async function findByOwnerAndTitle(db: Db, ownerId: number, title: string): Promise<SetRow | undefined> {
+  return db('mechanism_sets').where({ owner_id: ownerId, title }).first(COLUMNS);
+}
+
 export async function listAll(db: Db): Promise<SetRow[]> {
   return db('mechanism_sets').select(COLUMNS).orderBy('updated_at', 'desc').orderBy('id', 'desc');
 }

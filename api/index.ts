@@ -4,14 +4,19 @@ import { configFromEnv, useFakeGithub } from './config';
 import { createDb } from './db';
 import { createFakeGithub } from './dev/fake-github';
 import { loadEnv } from './env';
+import { startJobQueue } from './jobs/job-queue';
 import { createLogger } from './logger';
 import { setUpMail } from './mail/mail-setup';
+import { registerSimulationWorker } from './simulations/simulation.worker';
 
 const env = loadEnv();
 const logger = createLogger(env.LOG_LEVEL);
 const db = createDb(env.DATABASE_URL);
 const mail = await setUpMail(env, db, logger);
-const app = createApp({ db, config: configFromEnv(env), logger, mailTransport: mail.transport, devInbox: mail.devInbox });
+const jobs = await startJobQueue(env.DATABASE_URL, logger);
+// One process serves and works the queue by default; `npm run worker` adds more workers elsewhere.
+const stopWorker = env.RUN_WORKER === 'on' ? await registerSimulationWorker(db, jobs, logger) : async () => undefined;
+const app = createApp({ db, config: configFromEnv(env), logger, jobs, mailTransport: mail.transport, devInbox: mail.devInbox });
 const servers: Server[] = [];
 
 if (useFakeGithub(env)) {
@@ -30,6 +35,8 @@ async function shutdown(signal: string): Promise<void> {
   const forced = setTimeout(() => process.exit(1), 10_000);
   forced.unref();
   await Promise.all(servers.map((s) => new Promise((resolve) => s.close(resolve))));
+  await jobs.stop();
+  await stopWorker();
   await app.closeResources();
   await mail.stop();
   await db.destroy();

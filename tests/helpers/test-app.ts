@@ -5,6 +5,8 @@ import { createApp, type AppConfig, type AppDeps } from '@api/app';
 import { createFakeGithub, fakeGithubUrls } from '@api/dev/fake-github';
 import { createTestDatabase } from './test-db';
 
+type ExtraDeps = Partial<Omit<AppDeps, 'db' | 'config'>>;
+
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   db: Knex;
@@ -30,9 +32,10 @@ function listen(handler: Parameters<typeof createServer>[1]): Promise<{ server: 
  */
 export async function startTestApp(
   overrides: Partial<AppConfig> = {},
-  extraDeps: Partial<Omit<AppDeps, 'db' | 'config'>> = {},
+  extraDeps: ExtraDeps | ((database: { db: Knex; url: string }) => Promise<ExtraDeps>) = {},
 ): Promise<TestApp> {
   const database = await createTestDatabase();
+  const extra = typeof extraDeps === 'function' ? await extraDeps(database) : extraDeps;
   const fake = await listen(createFakeGithub());
   const placeholder = 'http://127.0.0.1:1';
   const config: AppConfig = {
@@ -48,7 +51,7 @@ export async function startTestApp(
   const holder: { app?: ReturnType<typeof createApp> } = {};
   const server = await listen((req, res) => holder.app!(req, res));
   config.github.callbackUrl = `${server.url}/auth/github/callback`;
-  holder.app = createApp({ db: database.db, config, ...extraDeps });
+  holder.app = createApp({ db: database.db, config, ...extra });
   return {
     app: holder.app,
     db: database.db,

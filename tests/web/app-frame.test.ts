@@ -4,7 +4,7 @@ import App from '@web/App.vue';
 import * as auth from '@web/services/auth';
 import { ApiError } from '@web/services/http';
 import { useSessionStore } from '@web/stores/session';
-import { demoUser, mountWithApp } from './mount-app';
+import { demoUser, eventually, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
 
@@ -15,7 +15,7 @@ afterEach(() => {
 
 async function appAt(path: string) {
   const mounted = await mountWithApp(App, { path });
-  await vi.waitFor(() => expect(mounted.wrapper.find('main').text()).not.toBe(''));
+  await eventually(() => expect(mounted.wrapper.find('main').text()).not.toBe(''));
   return mounted;
 }
 

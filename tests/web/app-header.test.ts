@@ -3,7 +3,7 @@ import { flushPromises } from '@vue/test-utils';
 import TheAppHeader from '@web/components/TheAppHeader.vue';
 import * as auth from '@web/services/auth';
 import type { Role } from '@web/services/types';
-import { demoUser, mountWithApp } from './mount-app';
+import { demoUser, eventually, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), signOut: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
 
@@ -65,7 +65,7 @@ describe('TheAppHeader', () => {
     signOut.querySelector<HTMLElement>('a, .p-menu-item-content')!.click();
     await flushPromises();
     expect(auth.signOut).toHaveBeenCalledTimes(1);
-    await vi.waitFor(() => expect(router.currentRoute.value.name).toBe('sign-in'));
+    await eventually(() => expect(router.currentRoute.value.name).toBe('sign-in'));
   });
 
   it('hands the search words to the library', async () => {

@@ -4,7 +4,7 @@ import SignInView from '@web/views/SignInView.vue';
 import SignUpView from '@web/views/SignUpView.vue';
 import * as auth from '@web/services/auth';
 import { ApiError } from '@web/services/http';
-import { demoUser, mountWithApp } from './mount-app';
+import { demoUser, eventually, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({
   fetchSession: vi.fn(),
@@ -33,7 +33,7 @@ describe('SignInView', () => {
     await wrapper.get('#sign-in-password').setValue('tidal-flats-42');
     await wrapper.get('form').trigger('submit');
     expect(auth.signIn).toHaveBeenCalledWith({ email: 'ines.marlow@example.test', password: 'tidal-flats-42' });
-    await vi.waitFor(() => expect(router.currentRoute.value.fullPath).toBe('/account'));
+    await eventually(() => expect(router.currentRoute.value.fullPath).toBe('/account'));
   });
 
   it("shows the server's message when the credentials are wrong, and stays", async () => {
@@ -88,6 +88,6 @@ describe('SignUpView', () => {
     await wrapper.get('#sign-up-password').setValue('tidal-flats-42');
     await wrapper.get('form').trigger('submit');
     expect(auth.signUp).toHaveBeenCalledWith({ name: 'Ines Marlow', email: 'ines.marlow@example.test', password: 'tidal-flats-42' });
-    await vi.waitFor(() => expect(router.currentRoute.value.name).toBe('library'));
+    await eventually(() => expect(router.currentRoute.value.name).toBe('library'));
   });
 });

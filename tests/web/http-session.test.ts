@@ -4,7 +4,7 @@ import { connectHttpToSession } from '@web/plugins/http';
 import { createAppRouter } from '@web/router';
 import { http } from '@web/services/http';
 import { useSessionStore } from '@web/stores/session';
-import { demoUser, freshPinia } from './mount-app';
+import { demoUser, eventually, freshPinia } from './mount-app';
 
 const fetchMock = vi.fn<typeof fetch>();
 
@@ -51,7 +51,7 @@ describe('http client wired to the session', () => {
         : jsonResponse(403, { error: { code: 'CSRF_INVALID', message: 'Stale token' } }),
     );
     await expect(http.post('/api/anything')).rejects.toMatchObject({ code: 'CSRF_INVALID' });
-    await vi.waitFor(() => expect(session.csrfToken).toBe('renewed'));
+    await eventually(() => expect(session.csrfToken).toBe('renewed'));
     expect(session.isSignedIn).toBe(true);
   });
 
@@ -65,7 +65,7 @@ describe('http client wired to the session', () => {
         : jsonResponse(401, { error: { code: 'UNAUTHENTICATED', message: 'Sign in first' } }),
     );
     await expect(http.get('/api/admin/users')).rejects.toMatchObject({ status: 401 });
-    await vi.waitFor(() => expect(router.currentRoute.value.name).toBe('sign-in'));
+    await eventually(() => expect(router.currentRoute.value.name).toBe('sign-in'));
     expect(router.currentRoute.value.query.redirect).toBe('/account?tab=roles');
     expect(session.isSignedIn).toBe(false);
     expect(session.csrfToken).toBe('fresh');

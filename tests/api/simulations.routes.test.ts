@@ -119,3 +119,18 @@ describe('POST /api/simulations/:id/cancel', () => {
     expect(res.body.status).toBe('cancelled');
   });
 });
+
+describe('POST /api/simulations for a saved revision', () => {
+  it('simulates a revision the person may read and answers 404 for a private one they may not', async () => {
+    const created = await author.post('/api/mechanisms', { title: 'Pentoxide decay', visibility: 'private', source: FIRST_ORDER });
+    expect(created.status).toBe(201);
+    const revision = await author.get(`/api/mechanisms/${created.body.slug}/revisions/1`);
+    const revisionId = revision.body.id;
+    const inputs = { initial: { N2O5: 5e11 }, tEnd: 20, points: 3, spacing: 'linear' };
+    const mine = await author.post('/api/simulations', { revisionId, inputs });
+    expect([200, 202]).toContain(mine.status);
+    const stranger = await signedInAgent(t.url, DEMO_PEOPLE[4].email);
+    const theirs = await stranger.post('/api/simulations', { revisionId, inputs });
+    expect(theirs.status).toBe(404);
+  });
+});

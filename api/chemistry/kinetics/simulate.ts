@@ -13,6 +13,10 @@ import { steadyStateNear } from './steady-state-report';
 
 const FULL_LIGHT: LightProfile = { kind: 'constant', level: 1 };
 const DEFAULT_RTOL = 1e-6;
+const DEPENDENT_ROUTES: KineticsDiagnostic = {
+  severity: 'warning', code: 'routes-dependent', step: null, label: null,
+  message: 'the routes given are linearly dependent, so their rates are not defined: give a basis of routes',
+};
 
 function emptyResult(input: SimulationInput, diagnostics: KineticsDiagnostic[]): SimulationResult {
   return {
@@ -58,6 +62,7 @@ export function simulate(input: SimulationInput, hooks: SimulationHooks = {}): S
   const run = integrateStiff(problem, y0, { t0, tEnd: input.tEnd, outputTimes: times, rtol, atol, maxSteps: input.maxSteps, maxWallMs: input.maxWallMs, ...hooks });
   const stepRates = stepRatesOverTime(system, run.states, run.times.map((t) => lightLevel(light, t)));
   const analysis = analyseRun(input, { system, sigma, states: run.states, stepRates });
+  if (sigma.length > 0 && analysis.routeResidual === null) diagnostics.push(DEPENDENT_ROUTES);
   const finalState = run.states.at(-1) ?? y0;
   const steadyState = input.steadyState && run.status === 'done'
     ? steadyStateNear({ system, species: model.species, start: finalState, held: heldForSteadyState(input, fixed), light: lightLevel(light, input.tEnd), rtol, atol, relaxTime: 1e6 * (input.tEnd - t0) })

@@ -15,7 +15,8 @@ const stratosphere = modelOf([
   'K6: NO2 + O -> NO + O2 @ 5.1e-12 * exp(210 / T)',
   'J7: NO2 + hv -> NO + O @ 8e-3',
 ]);
-const composition = stratosphere.species.map((key) => ({ O2: { O: 2 }, O: { O: 1 }, O3: { O: 3 }, NO: { N: 1, O: 1 }, NO2: { N: 1, O: 2 } })[key]!);
+const elements: Record<string, Record<string, number>> = { O2: { O: 2 }, O: { O: 1 }, O3: { O: 3 }, NO: { N: 1, O: 1 }, NO2: { N: 1, O: 2 } };
+const composition = stratosphere.species.map((key) => elements[key]);
 const tenDays = 10 * 86_400;
 
 function run(fixed: string[] = []) {

@@ -54,7 +54,8 @@ describe('route rates, chain length and turnover frequency', () => {
     // gives a route rate per total chlorine of k1k2[O3][O]/(k1[O3] + k2[O]) (textbook steady state).
     const [k1, k2, o3, o] = [1.2e-11, 3.7e-11, 3e12, 1e8];
     const cycle = modelOf([`C1: Cl + O3 -> ClO + O2 @ ${k1}`, `C2: ClO + O -> Cl + O2 @ ${k2}`]);
-    const composition = cycle.species.map((key) => ({ Cl: { Cl: 1 }, O3: { O: 3 }, ClO: { Cl: 1, O: 1 }, O2: { O: 2 }, O: { O: 1 } })[key]!);
+    const elements: Record<string, Record<string, number>> = { Cl: { Cl: 1 }, O3: { O: 3 }, ClO: { Cl: 1, O: 1 }, O2: { O: 2 }, O: { O: 1 } };
+    const composition = cycle.species.map((key) => elements[key]);
     const run = simulate({
       model: cycle, conditions: { T: 298, P: 1 }, initial: { Cl: 1e5, O3: o3, O: o }, fixed: ['O3', 'O'], tEnd: 100,
       output: { kind: 'linear', points: 11 }, routes: [{ name: 'ozone loss', multipliers: { C1: 1, C2: 1 } }],

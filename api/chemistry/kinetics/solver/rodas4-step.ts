@@ -1,7 +1,6 @@
-import { factorLu, solveLu } from './dense-lu';
+import { createIterationSolver, type IterationSolver } from './iteration-solver';
 import type { StiffProblem } from './problem';
 import { RODAS4 } from './rodas4-tableau';
-import { scatterToDense } from './sparse-pattern';
 
 /** Scratch arrays of one integration, allocated once. */
 export interface StepWork {
@@ -14,8 +13,7 @@ export interface StepWork {
   q1: Float64Array;
   q2: Float64Array;
   jacobian: Float64Array;
-  matrix: Float64Array;
-  pivots: Int32Array;
+  solver: IterationSolver;
 }
 
 export function allocateStepWork(problem: StiffProblem): StepWork {
@@ -31,8 +29,7 @@ export function allocateStepWork(problem: StiffProblem): StepWork {
     q1: vector(),
     q2: vector(),
     jacobian: new Float64Array(problem.pattern.columns.length),
-    matrix: new Float64Array(n * n),
-    pivots: new Int32Array(n),
+    solver: createIterationSolver(problem.pattern),
   };
 }
 
@@ -41,16 +38,6 @@ export function prepareStep(problem: StiffProblem, work: StepWork, t: number, y:
   problem.derivative(t, y, work.f0);
   problem.jacobian(t, y, work.jacobian);
   if (problem.timeDerivative) problem.timeDerivative(t, y, work.fTime);
-}
-
-function factorIterationMatrix(problem: StiffProblem, work: StepWork, h: number): boolean {
-  const n = problem.size;
-  const { matrix } = work;
-  matrix.fill(0);
-  const diagonal = 1 / (h * RODAS4.gamma);
-  for (let i = 0; i < n; i++) matrix[i * n + i] = diagonal;
-  scatterToDense(problem.pattern, work.jacobian, matrix, -1);
-  return factorLu(matrix, n, work.pivots);
 }
 
 function stageInput(work: StepWork, y: Float64Array, stage: number): void {
@@ -98,7 +85,7 @@ function denseCoefficients(work: StepWork): void {
  * work.q1 / work.q2. Returns false when the iteration matrix is singular.
  */
 export function rodas4Step(problem: StiffProblem, work: StepWork, t: number, y: Float64Array, h: number): boolean {
-  if (!factorIterationMatrix(problem, work, h)) return false;
+  if (!work.solver.factor(1 / (h * RODAS4.gamma), work.jacobian)) return false;
   const n = problem.size;
   const timeDependent = problem.timeDerivative !== undefined;
   for (let stage = 0; stage < 6; stage++) {
@@ -109,7 +96,7 @@ export function rodas4Step(problem: StiffProblem, work: StepWork, t: number, y: 
       problem.derivative(t + RODAS4.c[stage] * h, work.yStage, work.fStage);
       f = work.fStage;
     }
-    solveLu(work.matrix, n, work.pivots, stageRightSide(work, stage, h, f, timeDependent));
+    work.solver.solve(stageRightSide(work, stage, h, f, timeDependent));
   }
   for (let i = 0; i < n; i++) work.yNew[i] = work.yStage[i] + work.stages[5][i];
   denseCoefficients(work);

@@ -33,7 +33,9 @@ function buildSteps(nodes: ReturnType<typeof parseMechanism>['steps'], registry:
   const steps: StepModel[] = [];
   nodes.forEach((node, position) => {
     const step = buildStep(node, position + 1, registry, diagnostics);
-    if (step) steps.push({ ...step, index: steps.length });
+    if (!step) return;
+    step.index = steps.length;
+    steps.push(step);
   });
   return steps;
 }

@@ -1,11 +1,18 @@
 /**
- * The elimination of integer-matrix.ts on plain numbers, for speed. Every product and sum is
- * checked to stay a safe integer (below 2^53, where floating point is exact); the first one
- * that would not throws `Overflow`, and the caller then redoes the work on BigInt.
+ * The elimination of integer-matrix.ts on dense rows of plain numbers, for speed. Every product
+ * and sum is checked to stay a safe integer (below 2^53, where floating point is exact); the
+ * first one that would not throws `Overflow`, and the caller then redoes the work on BigInt.
  */
 export class Overflow extends Error {}
 
-type NumberRow = Map<number, number>;
+const LIMIT = Number.MAX_SAFE_INTEGER;
+// Rows are divided by their gcd only once their entries grow past this, to keep the work low.
+const NORMALISE_ABOVE = 2 ** 20;
+
+interface DenseRow {
+  values: Float64Array;
+  nonZero: number;
+}
 
 function gcdNumber(a: number, b: number): number {
   let x = Math.abs(a);
@@ -14,60 +21,75 @@ function gcdNumber(a: number, b: number): number {
   return x;
 }
 
-function safe(value: number): number {
-  if (!Number.isSafeInteger(value)) throw new Overflow();
-  return value;
-}
-
-function normalise(row: NumberRow): void {
+function normalise(row: DenseRow): void {
   let divisor = 0;
-  for (const value of row.values()) divisor = gcdNumber(divisor, value);
-  if (divisor > 1) for (const [column, value] of row) row.set(column, value / divisor);
+  for (const value of row.values) if (value !== 0) divisor = gcdNumber(divisor, value);
+  if (divisor > 1) for (let i = 0; i < row.values.length; i += 1) row.values[i] /= divisor;
 }
 
-function eliminate(row: NumberRow, pivotRow: NumberRow, column: number): void {
-  const a = pivotRow.get(column) as number;
-  const b = row.get(column) as number;
+/** row ← (a/g)·row − (b/g)·pivotRow, which is 0 in `column`; exact or Overflow. */
+function eliminate(row: DenseRow, pivotRow: DenseRow, column: number): void {
+  const a = pivotRow.values[column];
+  const b = row.values[column];
   const divisor = gcdNumber(a, b);
   const rowFactor = a / divisor;
   const pivotFactor = b / divisor;
-  if (rowFactor !== 1) for (const [key, value] of row) row.set(key, safe(value * rowFactor));
-  for (const [key, value] of pivotRow) {
-    const next = safe((row.get(key) ?? 0) - safe(value * pivotFactor));
-    if (next === 0) row.delete(key);
-    else row.set(key, next);
+  const values = row.values;
+  const pivot = pivotRow.values;
+  let nonZero = 0;
+  let largest = 0;
+  for (let i = 0; i < values.length; i += 1) {
+    const left = values[i] * rowFactor;
+    const right = pivot[i] * pivotFactor;
+    const next = left - right;
+    if (Math.abs(left) > LIMIT || Math.abs(right) > LIMIT || Math.abs(next) > LIMIT) throw new Overflow();
+    values[i] = next;
+    if (next !== 0) nonZero += 1;
+    if (Math.abs(next) > largest) largest = Math.abs(next);
   }
-  normalise(row);
+  row.nonZero = nonZero;
+  if (largest > NORMALISE_ABOVE) normalise(row);
 }
 
-function pickPivot(rows: NumberRow[], column: number): number {
+function pickPivot(rows: DenseRow[], column: number): number {
   let best = -1;
   for (let index = 0; index < rows.length; index += 1) {
-    if (rows[index].has(column) && (best < 0 || rows[index].size < rows[best].size)) best = index;
+    if (rows[index].values[column] !== 0 && (best < 0 || rows[index].nonZero < rows[best].nonZero)) best = index;
   }
   return best;
 }
 
-/** Fully reduced echelon form on numbers; throws Overflow when an entry would leave the safe range. */
-export function reduceNumbers(input: readonly Map<number, bigint>[], columnCount: number): { rows: NumberRow[]; pivots: number[] } {
-  const remaining: NumberRow[] = [];
-  for (const row of input) {
-    if (row.size === 0) continue;
-    const copy: NumberRow = new Map();
-    for (const [column, value] of row) copy.set(column, safe(Number(value)));
-    remaining.push(copy);
+function toDense(row: ReadonlyMap<number, bigint>, columnCount: number): DenseRow {
+  const values = new Float64Array(columnCount);
+  for (const [column, value] of row) {
+    const number = Number(value);
+    if (Math.abs(number) > LIMIT) throw new Overflow();
+    values[column] = number;
   }
-  const rows: NumberRow[] = [];
+  return { values, nonZero: row.size };
+}
+
+function toSparse(row: DenseRow): Map<number, number> {
+  normalise(row);
+  const sparse = new Map<number, number>();
+  row.values.forEach((value, column) => value !== 0 && sparse.set(column, value));
+  return sparse;
+}
+
+/** Fully reduced echelon form on numbers; throws Overflow when an entry would leave the safe range. */
+export function reduceNumbers(input: readonly Map<number, bigint>[], columnCount: number): { rows: Map<number, number>[]; pivots: number[] } {
+  const remaining = input.filter((row) => row.size > 0).map((row) => toDense(row, columnCount));
+  const rows: DenseRow[] = [];
   const pivots: number[] = [];
   for (let column = 0; column < columnCount && remaining.length > 0; column += 1) {
     const index = pickPivot(remaining, column);
     if (index < 0) continue;
     const [pivotRow] = remaining.splice(index, 1);
-    for (const row of remaining) if (row.has(column)) eliminate(row, pivotRow, column);
-    for (const row of rows) if (row.has(column)) eliminate(row, pivotRow, column);
-    for (let r = remaining.length - 1; r >= 0; r -= 1) if (remaining[r].size === 0) remaining.splice(r, 1);
+    for (const row of remaining) if (row.values[column] !== 0) eliminate(row, pivotRow, column);
+    for (const row of rows) if (row.values[column] !== 0) eliminate(row, pivotRow, column);
+    for (let r = remaining.length - 1; r >= 0; r -= 1) if (remaining[r].nonZero === 0) remaining.splice(r, 1);
     rows.push(pivotRow);
     pivots.push(column);
   }
-  return { rows, pivots };
+  return { rows: rows.map(toSparse), pivots };
 }

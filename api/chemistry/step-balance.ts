@@ -14,7 +14,7 @@ export interface StepBalance {
 /** Least common multiple of the coefficient denominators, so that sums stay whole numbers. */
 function denominatorLcm(step: StepModel): number {
   let common = 1;
-  for (const term of [...step.reactants, ...step.products]) {
+  for (const term of step.terms) {
     const den = Number(term.coef.den);
     let a = common;
     let b = den;

@@ -22,6 +22,8 @@ export interface StepModel {
   reversible: boolean;
   reactants: StepTerm[];
   products: StepTerm[];
+  /** Reactants then products, for checks that look at every term. */
+  terms: StepTerm[];
 }
 
 const coefficientCache = new Map<string, Fraction | null>();
@@ -77,7 +79,7 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   const reactants = mergeSide(left, registry);
   const products = mergeSide(right, registry);
   const label = node.label?.text ?? null;
-  return { index: -1, id: label ?? `#${position}`, label, node, reversible: node.reversible, reactants, products };
+  return { index: -1, id: label ?? `#${position}`, label, node, reversible: node.reversible, reactants, products, terms: [...reactants, ...products] };
 }
 
 /** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */

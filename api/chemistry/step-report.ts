@@ -56,7 +56,7 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
 }
 
 function reportOpaque(step: StepModel, diagnostics: Diagnostic[]): void {
-  const opaque = [...step.reactants, ...step.products].filter((term) => term.species.opaque).map((term) => term.species.key);
+  const opaque = step.terms.filter((term) => term.species.opaque).map((term) => term.species.key);
   if (opaque.length === 0) return;
   diagnostics.push(finding('opaque-species', step.node, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }

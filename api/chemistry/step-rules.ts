@@ -32,7 +32,7 @@ export function molecularity(step: StepModel): number {
 
 /** Integer coefficients and molecularity ≤ 3. */
 export function isElementary(step: StepModel): boolean {
-  const whole = [...step.reactants, ...step.products].every((term) => term.coef.isInteger());
+  const whole = step.terms.every((term) => term.coef.isInteger());
   return whole && molecularity(step) <= 3;
 }
 
@@ -54,7 +54,7 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   }
   const count = molecularity(step);
   if (count > 3) diagnostics.push(finding('molecularity-above-three', node, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
-  const lumped = [...step.reactants, ...step.products].filter((term) => !term.coef.isInteger());
+  const lumped = step.terms.filter((term) => !term.coef.isInteger());
   if (lumped.length > 0) {
     const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
     diagnostics.push(finding('not-elementary', node, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));

@@ -19,7 +19,7 @@ export function buildStoichiometry(steps: readonly StepModel[]): Stoichiometry {
   const aside = new Set<string>();
   const columns: Map<string, Fraction>[] = [];
   steps.forEach((step, index) => {
-    for (const term of [...step.reactants, ...step.products]) {
+    for (const term of step.terms) {
       if (term.species.kind === 'photon' || term.species.kind === 'third-body') aside.add(term.species.key);
     }
     const column = netOf(step);

@@ -2,12 +2,16 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
 import TheAppHeader from '@web/components/TheAppHeader.vue';
 import * as auth from '@web/services/auth';
+import { ApiError } from '@web/services/http';
+import * as queues from '@web/services/queues';
 import type { Role } from '@web/services/types';
 import { demoUser, eventually, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), signOut: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
+vi.mock('@web/services/queues', () => ({ fetchQueueCounts: vi.fn() }));
 
 async function headerFor(roles: Role[]) {
+  vi.mocked(queues.fetchQueueCounts).mockResolvedValue({ myReviews: 0, toAdopt: roles.includes('curator') ? 0 : null });
   vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(roles), csrfToken: 't' });
   return mountWithApp(TheAppHeader);
 }
@@ -66,6 +70,32 @@ describe('TheAppHeader', () => {
     await flushPromises();
     expect(auth.signOut).toHaveBeenCalledTimes(1);
     await eventually(() => expect(router.currentRoute.value.name).toBe('sign-in'));
+  });
+
+  it('shows how much waits in each queue, as numbers beside the links', async () => {
+    vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(['reviewer', 'curator']), csrfToken: 't' });
+    vi.mocked(queues.fetchQueueCounts).mockResolvedValue({ myReviews: 3, toAdopt: 1 });
+    const { wrapper } = await mountWithApp(TheAppHeader);
+    expect(wrapper.get('[data-queue="my-reviews"]').text().replace(/\s+/g, ' ')).toBe('My reviews 3 waiting');
+    expect(wrapper.get('[data-queue="to-adopt"] .p-badge').text()).toBe('1');
+  });
+
+  it('asks for queue counts again after each navigation', async () => {
+    const { router } = await headerFor(['reviewer']);
+    const asked = vi.mocked(queues.fetchQueueCounts).mock.calls.length;
+    await router.push('/my-reviews');
+    await flushPromises();
+    expect(vi.mocked(queues.fetchQueueCounts).mock.calls.length).toBe(asked + 1);
+  });
+
+  it('does not ask for queue counts for people without a queue, and shows none on failure', async () => {
+    vi.mocked(queues.fetchQueueCounts).mockClear();
+    await headerFor(['author', 'instructor']);
+    expect(queues.fetchQueueCounts).not.toHaveBeenCalled();
+    vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(['reviewer']), csrfToken: 't' });
+    vi.mocked(queues.fetchQueueCounts).mockRejectedValue(new ApiError(503, 'HTTP_503', 'down'));
+    const { wrapper } = await mountWithApp(TheAppHeader);
+    expect(wrapper.get('[data-queue="my-reviews"]').text()).toBe('My reviews');
   });
 
   it('hands the search words to the library', async () => {

@@ -55,3 +55,9 @@ export interface ApiErrorBody {
     details?: unknown;
   };
 }
+
+/** `GET /api/queues`: how much waits in each queue; `toAdopt` is null for non-curators. */
+export interface QueueCounts {
+  myReviews: number;
+  toAdopt: number | null;
+}

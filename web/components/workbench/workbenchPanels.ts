@@ -1,0 +1,12 @@
+import type { WorkbenchPanel } from './panelContract';
+
+/**
+ * The sections of the workbench's right half, in tab order. Each one receives
+ * `WorkbenchPanelProps` and may emit `select-step` and `replace-source` (panelContract.ts);
+ * add a panel by adding one entry here.
+ */
+export const workbenchPanels: WorkbenchPanel[] = [
+  { id: 'steps', label: 'Steps', icon: 'pi pi-list', component: () => import('./WorkbenchStepsPanel.vue') },
+  { id: 'species', label: 'Species', icon: 'pi pi-circle', component: () => import('./WorkbenchSpeciesPanel.vue') },
+  { id: 'routes', label: 'Routes', icon: 'pi pi-sync', component: () => import('./WorkbenchRoutesPanel.vue') },
+];

@@ -36,7 +36,8 @@ async function assertKeyFree(db: Knex.Transaction, lookupKey: string, ownId: num
 
 export async function listEntries(db: Knex, query: CatalogueSearchQuery) {
   const rows = await catalogue.search(db, query.q);
-  const matching = query.substructure ? rows.filter((row) => substructureFilter(query.substructure!)(row.smiles)) : rows;
+  const contains = query.substructure ? substructureFilter(query.substructure) : null;
+  const matching = contains ? rows.filter((row) => contains(row.smiles)) : rows;
   const start = (query.page - 1) * query.pageSize;
   return { total: matching.length, page: query.page, items: matching.slice(start, start + query.pageSize).map(presentEntry) };
 }

@@ -1,5 +1,7 @@
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
+import * as fontkit from 'fontkit';
 
 const require = createRequire(import.meta.url);
 
@@ -8,14 +10,28 @@ const require = createRequire(import.meta.url);
  * pdfkit embeds TrueType/OpenType; @fontsource/noto-sans ships only WOFF/WOFF2 files split into
  * script subsets, so the full Noto Sans TTFs come from @embedpdf/fonts-latin (OFL-1.1). Noto Sans
  * has no arrows (→ ⇌); those glyphs come from Noto Sans Math (@fontsource/noto-sans-math, a
- * WOFF that pdfkit's fontkit reads).
+ * WOFF that fontkit reads).
  */
 const notoDir = path.join(path.dirname(require.resolve('@embedpdf/fonts-latin')), '..', 'fonts');
 
-export const PDF_FONTS = {
+export const PDF_FONT_FILES = {
   text: path.join(notoDir, 'NotoSans-Regular.ttf'),
   bold: path.join(notoDir, 'NotoSans-Bold.ttf'),
   symbols: require.resolve('@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff'),
 } as const;
 
-export type PdfFont = keyof typeof PDF_FONTS;
+export type PdfFontName = keyof typeof PDF_FONT_FILES;
+
+let loaded: Record<PdfFontName, fontkit.Font> | null = null;
+
+/**
+ * The fonts, read once per process: fontkit parses a font's layout tables on first use (about
+ * half a second for Noto Sans), so every worksheet after the first reuses the parsed fonts.
+ * pdfkit still embeds a fresh subset of each in every document.
+ */
+export function pdfFonts(): Record<PdfFontName, fontkit.Font> {
+  loaded ??= Object.fromEntries(
+    Object.entries(PDF_FONT_FILES).map(([name, file]) => [name, fontkit.create(readFileSync(file)) as fontkit.Font]),
+  ) as Record<PdfFontName, fontkit.Font>;
+  return loaded;
+}

@@ -2,7 +2,7 @@ import PDFDocument from 'pdfkit';
 import type { ExportDocument, MechanismExport } from '../exports.schemas';
 import { formatKj, formatNm, multipliersText, rateText, yesNo } from '../number-format';
 import { drawNetwork } from './network-picture';
-import { PDF_FONTS } from './pdf-fonts';
+import { pdfFonts } from './pdf-fonts';
 import { contentWidth, ensureRoom, heading, paragraph, writeWithSymbols } from './pdf-text';
 
 type Doc = InstanceType<typeof PDFDocument>;
@@ -66,7 +66,8 @@ function mechanismPages(doc: Doc, mechanism: MechanismExport, index: number): vo
  */
 export function renderWorksheet(exported: ExportDocument): Promise<Buffer> {
   const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: exported.set?.title ?? exported.mechanisms[0].title, Creator: 'Cyclewright' } });
-  for (const [name, file] of Object.entries(PDF_FONTS)) doc.registerFont(name, file);
+  // pdfkit 0.20 takes a parsed fontkit font wherever it takes a file (PDFFontFactory.open).
+  for (const [name, font] of Object.entries(pdfFonts())) doc.registerFont(name, font as unknown as Buffer);
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
   const done = new Promise<Buffer>((resolve, reject) => {

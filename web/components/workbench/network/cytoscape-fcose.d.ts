@@ -1,0 +1,7 @@
+// cytoscape-fcose ships no types; it is a plain cytoscape extension (registered with cytoscape.use).
+declare module 'cytoscape-fcose' {
+  import type { Ext } from 'cytoscape';
+
+  const fcose: Ext;
+  export default fcose;
+}

@@ -7,11 +7,15 @@ export interface SourceToken {
   column: number;
 }
 
-/** A run of element symbols and counts as written (`CH3O2`), or a declared name (`RO2`). */
+/**
+ * A run of element symbols and counts as written (`CH3O2`), or a declared name (`RO2`).
+ * Formula parts are placed by `offset`, 0-based within the species text, so that one parsed
+ * formula serves every place the same species is written (add it to the species' column).
+ */
 export interface WordPart {
   kind: 'word';
   text: string;
-  column: number;
+  offset: number;
 }
 
 /** A bracketed group with an optional count: `(CH3)3`, `[PtCl4]`. */
@@ -19,8 +23,8 @@ export interface GroupPart {
   kind: 'group';
   bracket: '(' | '[';
   parts: FormulaPart[];
-  count: SourceToken | null;
-  column: number;
+  count: { text: string; offset: number } | null;
+  offset: number;
 }
 
 export type FormulaPart = WordPart | GroupPart;
@@ -32,9 +36,10 @@ export interface SpeciesNode {
   text: string;
   /** The formula part as written, without state tags and marks. */
   formulaText: string;
-  formula: FormulaPart[];
+  /** Shared by every species written with the same formula text: do not change it. */
+  formula: readonly FormulaPart[];
   /** State tags with their parentheses: `(3P)`, `(aq)`. */
-  states: string[];
+  states: readonly string[];
   /** Number of radical marks (`•` or `.`). */
   radicalMarks: number;
   /** The charge mark (`^2+`), if any. */

@@ -9,7 +9,11 @@ export interface LineContext {
   text: string;
   tokens: readonly Token[];
   diagnostics: Diagnostic[];
+  /** Formulas already converted in this text, by formula text (shared, position-free). */
+  formulas: Map<string, readonly FormulaPart[]>;
 }
+
+const NO_STATES: readonly string[] = Object.freeze([]);
 
 /** The token a template reference stands for on this line. */
 export function tokenOf(ref: TokenRef, context: LineContext): Token {
@@ -26,20 +30,31 @@ function tokenEnd(ref: TokenRef, context: LineContext): number {
   return token.offset + token.text.length;
 }
 
-function convertParts(list: Cons<RawPart>, context: LineContext): FormulaPart[] {
+function convertParts(list: Cons<RawPart>, context: LineContext, start: number): FormulaPart[] {
   return flatten(list).map((part): FormulaPart => {
     if (part.kind === 'word') {
       const token = tokenOf(part.token, context);
-      return { kind: 'word', text: token.text, column: token.col };
+      return { kind: 'word', text: token.text, offset: token.offset - start };
     }
+    const count = part.count ? tokenOf(part.count, context) : null;
+    const open = tokenOf(part.open, context);
     return {
       kind: 'group',
-      bracket: tokenOf(part.open, context).text === '[' ? '[' : '(',
-      parts: convertParts(part.formula, context),
-      count: part.count ? sourceToken(part.count, context) : null,
-      column: tokenOf(part.open, context).col,
+      bracket: open.text === '[' ? '[' : '(',
+      parts: convertParts(part.formula, context, start),
+      count: count ? { text: count.text, offset: count.offset - start } : null,
+      offset: open.offset - start,
     };
   });
+}
+
+function sharedFormula(formulaText: string, list: Cons<RawPart>, context: LineContext, start: number): readonly FormulaPart[] {
+  let formula = context.formulas.get(formulaText);
+  if (!formula) {
+    formula = convertParts(list, context, start);
+    context.formulas.set(formulaText, formula);
+  }
+  return formula;
 }
 
 function partEnd(part: RawPart, context: LineContext): number {
@@ -102,12 +117,13 @@ export function convertSpecies(raw: RawSpecies, context: LineContext): SpeciesNo
   const end = speciesEnd(parts, states, marks, context);
   const text = context.text.slice(start, end);
   reportBlank(text, start, context);
+  const formulaText = context.text.slice(start, partEnd(parts[parts.length - 1], context));
   return {
     kind: 'species',
     text,
-    formulaText: context.text.slice(start, partEnd(parts[parts.length - 1], context)),
-    formula: convertParts(raw.formula, context),
-    states: states.map((ref) => tokenOf(ref, context).text),
+    formulaText,
+    formula: sharedFormula(formulaText, raw.formula, context, start),
+    states: states.length === 0 ? NO_STATES : states.map((ref) => tokenOf(ref, context).text),
     ...readMarks(marks, context),
     line: context.line,
     column: start + 1,

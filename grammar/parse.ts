@@ -41,8 +41,9 @@ export function parseMechanism(text: string): ParsedMechanism {
   }
   const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
   parsed.lineCount = lines.length;
+  const formulas = new Map();
   for (let index = 0; index < lines.length; index += 1) {
-    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics };
+    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas };
     try {
       parseLine(context, parsed);
     } catch (error) {

@@ -11,7 +11,7 @@ function rejection(declaration: Declaration, known: ReadonlyMap<string, Declared
   const earlier = known.get(name);
   if (earlier) return `${name} is already declared on line ${earlier.line}`;
   if (name === 'hv' || name === 'e') return `${name} is a reserved word`;
-  if (looksLikeFormula(name) && countElements([{ kind: 'word', text: name, column: 1 }]).problems.length === 0) {
+  if (looksLikeFormula(name) && countElements([{ kind: 'word', text: name, offset: 0 }]).problems.length === 0) {
     return `${name} is already a formula; a declared name must not read as element symbols`;
   }
   return null;
@@ -22,7 +22,7 @@ function checkedFormula(declaration: Declaration, diagnostics: Diagnostic[]): De
   if (!declaration.species) return null;
   const { problems } = countElements(declaration.species.formula);
   for (const problem of problems) {
-    diagnostics.push(finding(problem.code, { line: declaration.line, column: problem.column }, problem.message, { found: problem.found }));
+    diagnostics.push(finding(problem.code, { line: declaration.line, column: (declaration.species?.column ?? 1) + problem.offset }, problem.message, { found: problem.found }));
   }
   return problems.length > 0 ? null : declaration.species;
 }

@@ -1,10 +1,10 @@
 import type { FormulaPart } from '@grammar/ast';
 import { elementBySymbol } from './elements';
 
-/** A problem inside a formula, positioned by column on its line. */
+/** A problem inside a species, placed by its 0-based offset in the species text. */
 export interface FormulaProblem {
   code: 'unknown-element' | 'bad-count' | 'undeclared-name';
-  column: number;
+  offset: number;
   found: string;
   message: string;
 }
@@ -33,21 +33,21 @@ function add(into: Map<string, number>, symbol: string, count: number): void {
   into.set(symbol, (into.get(symbol) ?? 0) + count);
 }
 
-function countWord(word: string, column: number, into: Map<string, number>, problems: FormulaProblem[]): void {
+function countWord(word: string, offset: number, into: Map<string, number>, problems: FormulaProblem[]): void {
   if (!looksLikeFormula(word)) {
     const message = `${word} is neither a formula nor a declared name; declare it with "%species ${word} = FORMULA" (or "%species ${word}" for an opaque name)`;
-    problems.push({ code: 'undeclared-name', column, found: word, message });
+    problems.push({ code: 'undeclared-name', offset, found: word, message });
     return;
   }
   for (const match of word.matchAll(SYMBOL_WITH_COUNT)) {
     const [, symbol, countText] = match;
-    const at = column + (match.index ?? 0);
+    const at = offset + (match.index ?? 0);
     const count = readCount(countText);
     if (!elementBySymbol(symbol)) {
       const message = `${symbol} in ${word} is not an element symbol (symbols are case-sensitive); a named species must be declared: "%species ${word} = FORMULA"`;
-      problems.push({ code: 'unknown-element', column: at, found: symbol, message });
+      problems.push({ code: 'unknown-element', offset: at, found: symbol, message });
     } else if (count === null) {
-      problems.push({ code: 'bad-count', column: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });
+      problems.push({ code: 'bad-count', offset: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });
     } else add(into, symbol, count);
   }
 }
@@ -63,14 +63,14 @@ function countInto(parts: readonly FormulaPart[], problems: FormulaProblem[]): M
   const elements = new Map<string, number>();
   for (const part of parts) {
     if (part.kind === 'word') {
-      countWord(part.text, part.column, elements, problems);
+      countWord(part.text, part.offset, elements, problems);
       continue;
     }
     const inner = countInto(part.parts, problems);
     const multiplier = part.count ? readCount(part.count.text) : 1;
     if (multiplier === null) {
       const message = `a group count must be a whole number from 1, not ${part.count?.text}`;
-      problems.push({ code: 'bad-count', column: part.count?.column ?? part.column, found: part.count?.text ?? '', message });
+      problems.push({ code: 'bad-count', offset: part.count?.offset ?? part.offset, found: part.count?.text ?? '', message });
       continue;
     }
     for (const [symbol, count] of inner) add(elements, symbol, count * multiplier);

@@ -35,7 +35,7 @@ export class SpeciesRegistry {
       this.cache.set(text, resolution);
     }
     for (const problem of resolution.problems) {
-      const position = { line: node.line, column: node.column + problem.column };
+      const position = { line: node.line, column: node.column + problem.offset };
       this.diagnostics.push(finding(problem.code, position, problem.message, { found: problem.found }));
     }
     return resolution.info;

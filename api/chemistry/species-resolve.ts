@@ -13,21 +13,21 @@ export interface DeclaredSpecies {
 
 export interface Resolution {
   info: SpeciesInfo | null;
-  /** Problems, with columns relative to the species' first character. */
+  /** Problems, placed by offset within the species text. */
   problems: FormulaProblem[];
 }
 
 // Phase tags say where a species is, not that it is excited, so they do not make it reactive.
 const PHASE_TAG = /^\((?:g|l|s|aq|cr|ads)\)$/;
 
-function readCharge(charge: SourceToken | null): { value: number; problem: FormulaProblem | null } {
+function readCharge(charge: SourceToken | null, speciesColumn: number): { value: number; problem: FormulaProblem | null } {
   if (!charge) return { value: 0, problem: null };
   const digits = charge.text.slice(1, -1);
   const sign = charge.text.endsWith('-') ? -1 : 1;
   if (digits === '') return { value: sign, problem: null };
   if (/^[1-9][0-9]*$/.test(digits)) return { value: sign * Number(digits), problem: null };
   const message = `charge ${charge.text} must be ^+, ^-, or a whole number from 1 with its sign (^2+)`;
-  return { value: 0, problem: { code: 'bad-count', column: charge.column, found: charge.text, message } };
+  return { value: 0, problem: { code: 'bad-count', offset: charge.column - speciesColumn, found: charge.text, message } };
 }
 
 function electronCount(elements: Map<string, number>, charge: number): number {
@@ -69,7 +69,7 @@ function describe(node: SpeciesNode, composition: Composition): SpeciesInfo {
 function declaredComposition(node: SpeciesNode, declared: DeclaredSpecies, charge: number | null): Composition {
   const source = declared.species;
   const inner = source ? countElements(source.formula) : null;
-  const innerCharge = source ? readCharge(source.charge).value : 0;
+  const innerCharge = source ? readCharge(source.charge, source.column).value : 0;
   const states = [...(source?.states ?? []), ...node.states];
   return {
     elements: inner ? inner.elements : null,
@@ -80,25 +80,21 @@ function declaredComposition(node: SpeciesNode, declared: DeclaredSpecies, charg
   };
 }
 
-function relativeTo(node: SpeciesNode, problems: FormulaProblem[]): FormulaProblem[] {
-  return problems.map((problem) => ({ ...problem, column: problem.column - node.column }));
-}
-
 /** Resolves one written species against the declarations (no caching here). */
 export function resolveSpecies(node: SpeciesNode, declarations: ReadonlyMap<string, DeclaredSpecies>): Resolution {
-  const charge = readCharge(node.charge);
+  const charge = readCharge(node.charge, node.column);
   const problems = charge.problem ? [charge.problem] : [];
   const onlyWord = node.formula.length === 1 && node.formula[0].kind === 'word' ? node.formula[0].text : null;
   const declared = onlyWord === null ? undefined : declarations.get(onlyWord);
   if (declared) {
     const composition = declaredComposition(node, declared, node.charge ? charge.value : null);
-    return { info: problems.length > 0 ? null : describe(node, composition), problems: relativeTo(node, problems) };
+    return { info: problems.length > 0 ? null : describe(node, composition), problems };
   }
   const counted = countElements(node.formula);
   problems.push(...counted.problems);
   const stateTagged = node.states.some((tag) => !PHASE_TAG.test(tag));
   const composition = { elements: counted.elements, charge: charge.value, radicalMarks: node.radicalMarks, stateTagged, declared: null };
-  return { info: problems.length > 0 ? null : describe(node, composition), problems: relativeTo(node, problems) };
+  return { info: problems.length > 0 ? null : describe(node, composition), problems };
 }
 
 /** Resolves any particle; reserved words map to their shared descriptions. */

@@ -12,6 +12,7 @@ import type { MailTransport } from './mail/mail-transport';
 import { outboxKick } from './mail/outbox-kick';
 import { mechanismsRoutes } from './mechanisms/mechanisms.routes';
 import { notificationsRoutes } from './notifications/notifications.routes';
+import { peopleRoutes } from './people/people.routes';
 import { queuesRoutes } from './queues/queues.routes';
 import { remarksRoutes } from './reviews/remarks.routes';
 import { mechanismRoundsRoutes, roundsRoutes } from './reviews/rounds.routes';
@@ -54,6 +55,7 @@ export function apiRouters(deps: FeatureDeps): Array<[string, Router]> {
     ['/api/attachments', attachmentsRoutes(db)],
     ['/api/notifications', notificationsRoutes(db)],
     ['/api/queues', queuesRoutes(db)],
+    ['/api/people', peopleRoutes(db)],
     ['/api/catalogue', catalogueRoutes(db)],
     ['/api/sets', setsRoutes(db)],
     ['/api/exports', exportsRoutes(db)],

@@ -17,8 +17,12 @@ export const useFakeSmtp = (env: AppEnv) => env.FAKE_SMTP === 'on' || (env.NODE_
 export async function setUpMail(env: AppEnv, db: Knex, logger: Logger) {
   let fake: FakeSmtp | null = null;
   if (useFakeSmtp(env)) {
-    fake = await startFakeSmtp(env.SMTP_PORT, '127.0.0.1');
-    logger.info(`Fake SMTP on 127.0.0.1:${fake.port}; captured mail at /api/dev/inbox (development only)`);
+    // A second server process (or another local SMTP) may hold the port: mail then goes there.
+    fake = await startFakeSmtp(env.SMTP_PORT, '127.0.0.1').catch((error: Error) => {
+      logger.warn(`Fake SMTP not started on port ${env.SMTP_PORT} (${error.message}); mail goes to whatever listens there`);
+      return null;
+    });
+    if (fake) logger.info(`Fake SMTP on 127.0.0.1:${fake.port}; captured mail at /api/dev/inbox (development only)`);
   }
   const transport: MailTransport = createMailTransport({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
   const retry = setInterval(() => {

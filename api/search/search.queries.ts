@@ -50,6 +50,10 @@ export async function findPage(db: Db, viewer: Viewer, filters: ListMechanismsQu
       'm.id', 'm.slug', 'm.title', 'm.tags', 'm.visibility', 'm.latest_revision_number as latestRevisionNumber',
       'm.updated_at as updatedAt', 'u.id as ownerId', 'u.name as ownerName', 'ref.number as referenceRevision',
       db.raw(`${ROUND_STATE} as "roundState"`),
+      db.raw(`(select jsonb_array_length(rv.analysis->'steps') from revisions rv
+               where rv.mechanism_id = m.id and rv.number = m.latest_revision_number) as "stepCount"`),
+      db.raw(`(select count(*) from revision_species rs join revisions rv on rv.id = rs.revision_id
+               where rv.mechanism_id = m.id and rv.number = m.latest_revision_number) as "speciesCount"`),
     );
   return { items: rows, total: Number(total), page: filters.page, pageSize: filters.pageSize };
 }

@@ -112,6 +112,7 @@ const LIST_ROUTES: Array<{ name: string; path: string; expected: (role: Role) =>
   { name: 'to adopt', path: '/api/queues/to-adopt', expected: roleOnly(['curator'], 200) },
   { name: 'notifications', path: '/api/notifications', expected: roleOnly(ROLES.slice(1), 200) },
   { name: 'dev inbox', path: '/api/dev/inbox', expected: roleOnly(['admin'], 200) },
+  { name: 'people', path: '/api/people?role=reviewer', expected: roleOnly(ROLES.slice(1), 200) },
 ];
 
 describe('lists, search, queues, notifications and the inbox', () => {

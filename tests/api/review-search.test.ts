@@ -28,6 +28,14 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
+describe('GET /api/people', () => {
+  it('finds people by name and role, without their e-mail addresses', async () => {
+    const res = await rosalind.get('/api/people?q=ti&role=reviewer');
+    expect(res.body).toEqual([{ id: t.ids.get(WHO.secondReviewer), name: 'Mei Tidewell', roles: ['author', 'reviewer'] }]);
+    expect((await rosalind.get('/api/people?role=owner')).status).toBe(400);
+  });
+});
+
 describe('GET /api/mechanisms', () => {
   it('searches titles and summaries with PostgreSQL text search (stemmed words)', async () => {
     expect(await slugsOf(rosalind, '?q=decomposes')).toEqual(['iodide-catalysed-peroxide-decomposition']);
@@ -59,6 +67,12 @@ describe('GET /api/mechanisms', () => {
     expect(page2.body.items.map((m: { title: string }) => m.title)).toEqual(['Salt-lake bromine cycle']);
     const reversed = await slugsOf(curator, '?sort=title&order=desc');
     expect(reversed[0]).toBe('salt-lake-bromine-cycle');
+  });
+
+  it('gives each item its step and species counts from the latest revision', async () => {
+    const [item] = (await curator.get('/api/mechanisms?tag=teaching')).body.items;
+    // I1, I2 over H2O2, I^-, H2O, IO^-, O2.
+    expect(item).toMatchObject({ stepCount: 2, speciesCount: 5, roundState: null, referenceRevision: null });
   });
 
   it('rejects a bad filter with 400 naming it', async () => {

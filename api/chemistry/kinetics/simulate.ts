@@ -7,7 +7,9 @@ import type { KineticsDiagnostic } from './model';
 import { outputTimes } from './output-grid';
 import { checkScalars, fixedMask, initialVector, routeMatrix } from './simulation-input';
 import { analyseRun } from './simulation-report';
-import type { SimulationHooks, SimulationInput, SimulationResult } from './simulation-types';
+import type { RateSystem } from './rate-system';
+import type { SimulationHooks, SimulationInput, SimulationResult, SteadyStateReport } from './simulation-types';
+import type { IntegrationResult } from './solver/integration-types';
 import { integrateStiff } from './solver/integrate';
 import { steadyStateNear } from './steady-state-report';
 
@@ -37,6 +39,32 @@ function defaultAbsoluteTolerance(y0: Float64Array): number {
   return Math.max(1e-30, 1e-16 * Math.max(...y0));
 }
 
+interface Prepared {
+  system: RateSystem;
+  y0: Float64Array;
+  fixed: Uint8Array;
+  light: LightProfile;
+  rtol: number;
+  atol: number;
+}
+
+function steadyStateOf(input: SimulationInput, prepared: Prepared, run: IntegrationResult, hooks: SimulationHooks): SteadyStateReport | null {
+  if (!input.steadyState || run.status !== 'done') return null;
+  const { system, fixed, light, rtol, atol } = prepared;
+  const span = input.tEnd - (input.t0 ?? 0);
+  return steadyStateNear({
+    system, species: input.model.species, start: run.states.at(-1) ?? prepared.y0, held: heldForSteadyState(input, fixed),
+    light: lightLevel(light, input.tEnd), rtol, atol, relaxTime: 1e6 * span, shouldStop: hooks.shouldStop, maxWallMs: input.maxWallMs,
+  });
+}
+
+function integrate(input: SimulationInput, prepared: Prepared, times: number[], hooks: SimulationHooks): IntegrationResult {
+  const { system, y0, fixed, light, rtol, atol } = prepared;
+  const t0 = input.t0 ?? 0;
+  const problem = massActionProblem(system, { fixed, light, t0, tEnd: input.tEnd });
+  return integrateStiff(problem, y0, { t0, tEnd: input.tEnd, outputTimes: times, rtol, atol, maxSteps: input.maxSteps, maxWallMs: input.maxWallMs, ...hooks });
+}
+
 /**
  * Runs a kinetics simulation: compiles the rates at the conditions, integrates the mass-action
  * equations with RODAS4 from the initial concentrations (fixed species clamped, photolysis scaled by
@@ -48,29 +76,21 @@ function defaultAbsoluteTolerance(y0: Float64Array): number {
 export function simulate(input: SimulationInput, hooks: SimulationHooks = {}): SimulationResult {
   checkScalars(input);
   const { model } = input;
-  const t0 = input.t0 ?? 0;
-  const times = outputTimes(input.output, t0, input.tEnd);
+  const times = outputTimes(input.output, input.t0 ?? 0, input.tEnd);
   const y0 = initialVector(model, input.initial);
   const fixed = fixedMask(model, input.fixed);
   const sigma = routeMatrix(model, input.routes);
   const { system, diagnostics } = buildRateSystem(model, input.conditions);
   if (!system) return emptyResult(input, diagnostics);
-  const light = input.light ?? FULL_LIGHT;
-  const rtol = input.rtol ?? DEFAULT_RTOL;
-  const atol = input.atol ?? defaultAbsoluteTolerance(y0);
-  const problem = massActionProblem(system, { fixed, light, t0, tEnd: input.tEnd });
-  const run = integrateStiff(problem, y0, { t0, tEnd: input.tEnd, outputTimes: times, rtol, atol, maxSteps: input.maxSteps, maxWallMs: input.maxWallMs, ...hooks });
-  const stepRates = stepRatesOverTime(system, run.states, run.times.map((t) => lightLevel(light, t)));
+  const prepared = { system, y0, fixed, light: input.light ?? FULL_LIGHT, rtol: input.rtol ?? DEFAULT_RTOL, atol: input.atol ?? defaultAbsoluteTolerance(y0) };
+  const run = integrate(input, prepared, times, hooks);
+  const stepRates = stepRatesOverTime(system, run.states, run.times.map((t) => lightLevel(prepared.light, t)));
   const analysis = analyseRun(input, { system, sigma, states: run.states, stepRates });
   if (sigma.length > 0 && analysis.routeResidual === null) diagnostics.push(DEPENDENT_ROUTES);
-  const finalState = run.states.at(-1) ?? y0;
-  const steadyState = input.steadyState && run.status === 'done'
-    ? steadyStateNear({ system, species: model.species, start: finalState, held: heldForSteadyState(input, fixed), light: lightLevel(light, input.tEnd), rtol, atol, relaxTime: 1e6 * (input.tEnd - t0) })
-    : null;
   return {
     status: run.status, message: run.message, diagnostics, species: model.species, steps: model.steps.map((step) => step.label),
     thirdBody: system.thirdBody, times: run.times, concentrations: run.states.map((state) => Array.from(state)), stepRates,
-    ...analysis, steadyState,
+    ...analysis, steadyState: steadyStateOf(input, prepared, run, hooks),
     conservation: input.composition ? checkElementConservation(input.composition, fixed, run.states) : null,
     stats: run.stats,
   };

@@ -15,12 +15,17 @@ export interface SteadyStateSetup {
   atol: number;
   /** A time long enough to relax to steady state when Newton alone does not converge. */
   relaxTime: number;
+  /** Cancellation and wall-time budget of the run, honoured by the relaxing integration too. */
+  shouldStop?: () => boolean;
+  maxWallMs?: number;
 }
 
 function relaxed(setup: SteadyStateSetup): Float64Array {
   const light = { kind: 'constant' as const, level: setup.light };
   const problem = massActionProblem(setup.system, { fixed: setup.held, light, t0: 0, tEnd: setup.relaxTime });
-  const run = integrateStiff(problem, setup.start, { t0: 0, tEnd: setup.relaxTime, outputTimes: [setup.relaxTime], rtol: setup.rtol, atol: setup.atol, maxSteps: 20_000 });
+  const { shouldStop, maxWallMs } = setup;
+  const limits = { maxSteps: 20_000, shouldStop, maxWallMs };
+  const run = integrateStiff(problem, setup.start, { t0: 0, tEnd: setup.relaxTime, outputTimes: [setup.relaxTime], rtol: setup.rtol, atol: setup.atol, ...limits });
   return run.states.at(-1) ?? setup.start;
 }
 

@@ -18,6 +18,7 @@ const Env = z.object({
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   MAIL_FROM: z.string().default('Cyclewright <no-reply@cyclewright.example.test>'),
   FAKE_SMTP: z.enum(['on', 'off']).optional(),
+  ENDORSEMENTS_NEEDED: z.coerce.number().int().min(1).max(20).default(2),
   SERVE_WEB: z.enum(['on', 'off']).default('on'),
   RUN_WORKER: z.enum(['on', 'off']).default('on'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

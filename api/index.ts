@@ -16,7 +16,8 @@ const mail = await setUpMail(env, db, logger);
 const jobs = await startJobQueue(env.DATABASE_URL, logger);
 // One process serves and works the queue by default; `npm run worker` adds more workers elsewhere.
 const stopWorker = env.RUN_WORKER === 'on' ? await registerSimulationWorker(db, jobs, logger) : async () => undefined;
-const app = createApp({ db, config: configFromEnv(env), logger, jobs, mailTransport: mail.transport, devInbox: mail.devInbox });
+const app = createApp({ db, config: configFromEnv(env), logger, jobs, mailTransport: mail.transport, devInbox: mail.devInbox,
+  endorsementsNeeded: env.ENDORSEMENTS_NEEDED });
 const servers: Server[] = [];
 
 if (useFakeGithub(env)) {

@@ -39,11 +39,11 @@ describe('TheAppHeader', () => {
   });
 
   it.each<[Role[], string[]]>([
-    [['author'], ['Library']],
-    [['reviewer'], ['Library', 'My reviews']],
-    [['curator'], ['Library', 'To adopt']],
-    [['author', 'reviewer', 'curator'], ['Library', 'My reviews', 'To adopt']],
-    [['instructor', 'admin'], ['Library']],
+    [['author'], ['Library', 'Catalogue', 'Sets']],
+    [['reviewer'], ['Library', 'Catalogue', 'Sets', 'My reviews']],
+    [['curator'], ['Library', 'Catalogue', 'Sets', 'To adopt']],
+    [['author', 'reviewer', 'curator'], ['Library', 'Catalogue', 'Sets', 'My reviews', 'To adopt']],
+    [['instructor', 'admin'], ['Library', 'Catalogue', 'Sets']],
   ])('for roles %j shows the navigation %j', async (roles, expected) => {
     const { wrapper } = await headerFor(roles);
     expect(navLabels(wrapper)).toEqual(expected);

@@ -30,6 +30,8 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Create an account', public: true, guestOnly: true, bare: true },
   },
   { path: '/', name: 'library', component: () => import('@web/views/LibraryView.vue'), meta: { title: 'Library' } },
+  { path: '/catalogue', name: 'catalogue', component: () => import('@web/views/CatalogueView.vue'), meta: { title: 'Species catalogue' } },
+  { path: '/sets', name: 'sets', component: () => import('@web/views/SetsView.vue'), meta: { title: 'Sets' } },
   { path: '/account', name: 'account', component: () => import('@web/views/AccountView.vue'), meta: { title: 'Account' } },
   {
     path: '/admin/roles',

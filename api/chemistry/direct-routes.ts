@@ -4,7 +4,7 @@ import type { SparseRow } from './integer-matrix';
 /** Rows of the enumeration tableau above this count stop the enumeration (bounded work). */
 export const DIRECT_ROUTE_ROW_LIMIT = 5_000;
 /** Support comparisons above this count stop it too: the elementarity test is the costly part. */
-export const DIRECT_ROUTE_WORK_LIMIT = 20_000_000;
+export const DIRECT_ROUTE_WORK_LIMIT = 5_000_000;
 
 interface TableauRow {
   /** Balance of each intermediate, for the part not processed yet. */

@@ -49,7 +49,7 @@ export interface Conditions {
 
 /** A problem found while building the numeric system, pointing at a step and, when known, a column. */
 export interface KineticsDiagnostic {
-  severity: 'error' | 'warning';
+  severity: 'error' | 'warning' | 'info';
   code: string;
   message: string;
   step: number | null;

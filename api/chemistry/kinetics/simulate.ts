@@ -15,16 +15,16 @@ import { steadyStateNear } from './steady-state-report';
 
 const FULL_LIGHT: LightProfile = { kind: 'constant', level: 1 };
 const DEFAULT_RTOL = 1e-6;
-const DEPENDENT_ROUTES: KineticsDiagnostic = {
-  severity: 'warning', code: 'routes-dependent', step: null, label: null,
-  message: 'the routes given are linearly dependent, so their rates are not defined: give a basis of routes',
-};
+function dependentRoutes(names: string[]): KineticsDiagnostic {
+  const message = `no rate for ${names.join('; ')}: each is a combination of routes listed before it, so its rate is not defined`;
+  return { severity: 'info', code: 'routes-dependent', step: null, label: null, message };
+}
 
 function emptyResult(input: SimulationInput, diagnostics: KineticsDiagnostic[]): SimulationResult {
   return {
     status: 'invalid', message: 'the mechanism has rate errors', diagnostics, species: input.model.species,
     steps: input.model.steps.map((step) => step.label), thirdBody: null, times: [], concentrations: [], stepRates: [],
-    production: [], loss: [], byStep: [], routes: [], routeResidual: null, steadyState: null, conservation: null,
+    production: [], loss: [], byStep: [], routes: [], routeResidual: null, routesLeftOut: [], steadyState: null, conservation: null,
     stats: { accepted: 0, rejected: 0, clippedValues: 0, largestClipped: 0 },
   };
 }
@@ -86,7 +86,7 @@ export function simulate(input: SimulationInput, hooks: SimulationHooks = {}): S
   const run = integrate(input, prepared, times, hooks);
   const stepRates = stepRatesOverTime(system, run.states, run.times.map((t) => lightLevel(prepared.light, t)));
   const analysis = analyseRun(input, { system, sigma, states: run.states, stepRates });
-  if (sigma.length > 0 && analysis.routeResidual === null) diagnostics.push(DEPENDENT_ROUTES);
+  if (analysis.routesLeftOut.length > 0) diagnostics.push(dependentRoutes(analysis.routesLeftOut));
   return {
     status: run.status, message: run.message, diagnostics, species: model.species, steps: model.steps.map((step) => step.label),
     thirdBody: system.thirdBody, times: run.times, concentrations: run.states.map((state) => Array.from(state)), stepRates,

@@ -1,5 +1,6 @@
 import { catalystFamily, chainLengths, turnoverFrequencies } from './analysis/chain-and-turnover';
 import { speciesBudget } from './analysis/fluxes';
+import { independentRoutes } from './analysis/independent-routes';
 import { routeRates } from './analysis/route-rates';
 import type { KineticModel } from './model';
 import type { RateSystem } from './rate-system';
@@ -25,9 +26,10 @@ function familyOf(input: SimulationInput, catalyst: { species: string; family?: 
   return catalystFamily(index(catalyst.species), candidates, composition);
 }
 
-function routeReports(input: SimulationInput, outcome: RunOutcome, fitted: number[][]): RouteReport[] {
+function routeReports(input: SimulationInput, outcome: RunOutcome, kept: number[], fitted: number[][]): RouteReport[] {
   const initiation = initiationSteps(input.model);
-  return (input.routes ?? []).map((route, r) => {
+  return kept.map((routeIndex, r) => {
+    const route = (input.routes ?? [])[routeIndex];
     const rates = fitted.map((atTime) => atTime[r]);
     const turnover = (input.catalysts ?? []).map((catalyst) => {
       const family = familyOf(input, catalyst);
@@ -37,12 +39,18 @@ function routeReports(input: SimulationInput, outcome: RunOutcome, fitted: numbe
   });
 }
 
-/** The per-time analysis of a finished (or stopped) run: budgets, route rates, chain lengths, TOFs. */
-export function analyseRun(input: SimulationInput, outcome: RunOutcome): Pick<SimulationResult, 'production' | 'loss' | 'byStep' | 'routes' | 'routeResidual'> {
+/**
+ * The per-time analysis of a finished (or stopped) run: budgets, route rates, chain lengths, TOFs.
+ * Routes that depend linearly on earlier ones are left out of the fit (their rates are not
+ * defined) and named in routesLeftOut.
+ */
+export function analyseRun(input: SimulationInput, outcome: RunOutcome): Pick<SimulationResult, 'production' | 'loss' | 'byStep' | 'routes' | 'routeResidual' | 'routesLeftOut'> {
   const { model } = input;
   const budget = speciesBudget(outcome.system, outcome.stepRates);
   const byStep = budget.byStep.map((flux) => ({ species: model.species[flux.species], step: model.steps[flux.step].label, rates: flux.rates }));
-  const fit = routeRates(outcome.sigma, outcome.stepRates);
-  const routes = fit ? routeReports(input, outcome, fit.rates) : [];
-  return { production: budget.production, loss: budget.loss, byStep, routes, routeResidual: fit ? fit.residual : null };
+  const kept = independentRoutes(outcome.sigma);
+  const fit = routeRates(kept.map((r) => outcome.sigma[r]), outcome.stepRates);
+  const routes = fit ? routeReports(input, outcome, kept, fit.rates) : [];
+  const leftOut = (input.routes ?? []).filter((_, r) => !kept.includes(r)).map((route) => route.name);
+  return { production: budget.production, loss: budget.loss, byStep, routes, routeResidual: fit ? fit.residual : null, routesLeftOut: leftOut };
 }

@@ -78,8 +78,10 @@ export interface SimulationResult {
   loss: number[][];
   byStep: { species: string; step: string; rates: number[] }[];
   routes: RouteReport[];
-  /** Relative misfit of the route fit per time, or null when the routes are dependent. */
+  /** Relative misfit of the route fit per time. */
   routeResidual: number[] | null;
+  /** Names of routes left out of the fit because they are combinations of earlier routes. */
+  routesLeftOut: string[];
   steadyState: SteadyStateReport | null;
   conservation: ConservationCheck | null;
   stats: IntegrationStats;

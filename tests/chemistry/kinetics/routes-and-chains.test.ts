@@ -35,6 +35,16 @@ describe('route rates, chain length and turnover frequency', () => {
     expect(result.routeResidual![1]).toBeGreaterThan(1e-3);
   });
 
+  it('leaves a route that is a sum of earlier ones out of the fit and names it', () => {
+    const run = simulate({
+      model: chain, conditions: { T: 298, P: 1 }, initial: { I, S }, fixed: ['I', 'S'], tEnd: 1e4, output: { kind: 'linear', points: 3 },
+      routes: [{ name: 'chain', multipliers: { Prop: 1 } }, { name: 'balance', multipliers: { Init: 1, Term: 1 } }, { name: 'both', multipliers: { Init: 1, Prop: 2, Term: 1 } }],
+    });
+    expect(run.routes.map((route) => route.name)).toEqual(['chain', 'balance']);
+    expect(run.routesLeftOut).toEqual(['both']);
+    expect(run.diagnostics).toEqual([expect.objectContaining({ severity: 'info', code: 'routes-dependent' })]);
+  });
+
   it('gives the chain length kp[R][S]/(ki[I])', () => {
     const expected = (kp * radical * S) / (ki * I);
     expect(result.routes[0].chainLength.at(-1)! / expected).toBeCloseTo(1, 6);

@@ -41,7 +41,3 @@ export async function markFailed(db: Db, row: OutboxRow, error: string, maxAttem
     next_attempt_at: db.raw(`now() + interval '1 minute' * ?`, [2 ** (attempts - 1)]),
   });
 }
-
-export async function findAll(db: Db) {
-  return db('mail_outbox').orderBy('id').select('id', 'to_address as toAddress', 'kind', 'subject', 'status', 'attempts', 'last_error as lastError');
-}

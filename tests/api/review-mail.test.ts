@@ -2,7 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { deliverOutbox } from '@api/mail/deliver-outbox';
 import { startFakeSmtp } from '@api/mail/fake-smtp';
 import { createMailTransport } from '@api/mail/mail-transport';
+import { seedPeople } from '@api/seed/seed-people';
 import { signedInAgent, type CsrfAgent } from '../helpers/agent';
+import { startTestApp } from '../helpers/test-app';
 import { BROMINE_R1, BROMINE_R2, startReviewApp, waitFor, WHO, type ReviewApp } from './review-helpers';
 
 describe('notifications and e-mail', () => {
@@ -70,6 +72,19 @@ describe('notifications and e-mail', () => {
     expect((await owner.post(`/api/notifications/${first.id}/read`)).status).toBe(204);
     const unread = (await owner.get('/api/notifications?unread=true')).body.map((n: { id: number }) => n.id);
     expect(unread).not.toContain(first.id);
+  });
+});
+
+describe('GET /api/dev/inbox without a fake mail server', () => {
+  it('answers 404 to an admin where no fake SMTP server runs (production)', async () => {
+    const t = await startTestApp();
+    try {
+      await seedPeople(t.db);
+      const res = await (await signedInAgent(t.url, WHO.admin)).get('/api/dev/inbox');
+      expect([res.status, res.body.error.code]).toEqual([404, 'NOT_FOUND']);
+    } finally {
+      await t.close();
+    }
   });
 });
 

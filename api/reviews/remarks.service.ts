@@ -35,7 +35,8 @@ export async function addRemark(db: Knex, viewer: Viewer, roundId: number, input
       recipientIds: [mechanism.ownerId, ...(await mechanisms.collaboratorIds(trx, mechanism.id))],
       facts: { mechanismTitle: mechanism.title, slug: mechanism.slug, actorName: await nameOf(trx, viewer.id), revision: revision.number, step: step.label ?? input.step, remark: input.body },
     });
-    return (await remarks.listForRound(trx, roundId)).find((remark) => remark.id === id)!;
+    const created = (await remarks.listForRound(trx, roundId)).find((remark) => remark.id === id)!;
+    return { ...created, replies: [] };
   });
 }
 

@@ -48,7 +48,7 @@ describe('the review journey: r1 → round → reviewers → remarks → r2 → 
   it('takes remarks anchored to steps, and a verdict asking for revision', async () => {
     const onB2 = await kofi.post(`/api/rounds/${state.roundId}/remarks`, { step: 'B2', body: 'Is the **BrO self-reaction** channel to Br2 + O2 left out on purpose?' });
     expect(onB2.status).toBe(201);
-    expect(onB2.body).toMatchObject({ revision: 1, stepLabel: 'B2', stepLine: 5, matching: true });
+    expect(onB2.body).toMatchObject({ revision: 1, stepLabel: 'B2', stepLine: 5, matching: true, replies: [] });
     expect(onB2.body.bodyHtml).toContain('<strong>BrO self-reaction</strong>');
     const onB5 = await mei.post(`/api/rounds/${state.roundId}/remarks`, { step: 'B5', body: 'Br2 photolysis needs a source of Br2.' });
     expect(onB5.status).toBe(201);

@@ -15,6 +15,7 @@ interface RunState {
   nextOutput: number;
   result: IntegrationResult;
   clips: ClipRecord;
+  clock: () => number;
   startedAt: number;
   reportedFraction: number;
 }
@@ -48,8 +49,7 @@ function stopReason(state: RunState): [IntegrationStatus, string] | null {
   if (options.shouldStop?.()) return ['cancelled', `cancelled at t = ${state.t}`];
   const steps = result.stats.accepted + result.stats.rejected;
   if (steps >= (options.maxSteps ?? 200_000)) return ['step-budget', `step budget of ${steps} steps used up at t = ${state.t}`];
-  const clock = options.clock ?? (() => performance.now());
-  if (options.maxWallMs !== undefined && clock() - state.startedAt > options.maxWallMs) {
+  if (options.maxWallMs !== undefined && state.clock() - state.startedAt > options.maxWallMs) {
     return ['time-budget', `time budget of ${options.maxWallMs} ms used up at t = ${state.t}`];
   }
   return null;
@@ -132,7 +132,7 @@ export function integrateStiff(problem: StiffProblem, y0: Float64Array, options:
   const result: IntegrationResult = { status: 'done', message: null, times: [], states: [], reachedTime: options.t0, stats };
   const frozen = problem.frozen ?? new Uint8Array(problem.size);
   const clock = options.clock ?? (() => performance.now());
-  const state: RunState = { problem, options, work, frozen, t: options.t0, y, h: 0, nextOutput: 0, result, clips, startedAt: clock(), reportedFraction: 0 };
+  const state: RunState = { problem, options, work, frozen, t: options.t0, y, h: 0, nextOutput: 0, result, clips, clock, startedAt: clock(), reportedFraction: 0 };
   emitInitial(state);
   prepareStep(problem, work, state.t, y);
   state.h = options.initialStep ?? initialStepSize(y, work.f0, options, options.tEnd - options.t0);

@@ -61,7 +61,7 @@ export async function listForMechanism(db: Db, mechanismId: number) {
       'r.id', 'r.number', 'r.change_note as changeNote', 'r.created_at as createdAt',
       'u.id as authorId', 'u.name as authorName',
       db.raw("jsonb_array_length(r.analysis->'steps') as \"stepCount\""),
-      db.raw("(select count(*) from jsonb_array_elements(r.analysis->'diagnostics') d where d->>'severity' = 'error') as \"errorCount\""),
+      db.raw("(select count(*) from jsonb_array_elements(r.analysis->'diagnostics') d where d->>'severity' = 'error')::int as \"errorCount\""),
     );
 }
 

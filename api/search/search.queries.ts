@@ -52,7 +52,7 @@ export async function findPage(db: Db, viewer: Viewer, filters: ListMechanismsQu
       db.raw(`${ROUND_STATE} as "roundState"`),
       db.raw(`(select jsonb_array_length(rv.analysis->'steps') from revisions rv
                where rv.mechanism_id = m.id and rv.number = m.latest_revision_number) as "stepCount"`),
-      db.raw(`(select count(*) from revision_species rs join revisions rv on rv.id = rs.revision_id
+      db.raw(`(select count(*)::int from revision_species rs join revisions rv on rv.id = rs.revision_id
                where rv.mechanism_id = m.id and rv.number = m.latest_revision_number) as "speciesCount"`),
     );
   return { items: rows, total: Number(total), page: filters.page, pageSize: filters.pageSize };

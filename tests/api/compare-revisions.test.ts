@@ -63,6 +63,11 @@ describe('GET /api/mechanisms/:slug/compare', () => {
     expect(removed).toEqual([expect.stringContaining('1.7e-11'), expect.stringContaining('B5: Br2')]);
   });
 
+  it('lists the history with counts taken from each stored analysis', async () => {
+    const history = (await owner.get('/api/mechanisms/salt-lake-bromine-cycle/revisions')).body;
+    expect(history.map((r: { number: number; stepCount: number; errorCount: number }) => [r.number, r.stepCount, r.errorCount])).toEqual([[1, 5, 0], [2, 4, 0]]);
+  });
+
   it('reports the routes that change when a step enters', async () => {
     const r3 = `${BROMINE_R2}B6: BrO• + O(3P) -> Br• + O2   @ 1.9e-11\n`;
     await owner.post('/api/mechanisms/salt-lake-bromine-cycle/revisions', { base: 2, source: r3 });

@@ -47,6 +47,7 @@ describe('GET /api/mechanisms', () => {
   it('finds the mechanisms that contain a species, by its canonical key', async () => {
     expect(await slugsOf(rosalind, `?species=${encodeURIComponent('I^-')}`)).toEqual(['iodide-catalysed-peroxide-decomposition']);
     expect(await slugsOf(rosalind, `?species=${encodeURIComponent('Br•')}`)).toEqual(['salt-lake-bromine-cycle']);
+    expect(await slugsOf(rosalind, '?species=BrO.')).toEqual(['salt-lake-bromine-cycle']);
     expect(await slugsOf(mei, '?species=CO*')).toEqual(['co-oxidation-on-a-platinum-group-surface']);
     expect(await slugsOf(rosalind, '?species=CO*')).toEqual([]);
   });

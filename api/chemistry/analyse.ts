@@ -19,8 +19,11 @@ import { sortDiagnostics } from './diagnostic-order';
 
 export type { MechanismAnalysis } from './analysis-types';
 
-/** Above this many steps routes are not computed (a diagnostic says so). */
-export const MAX_ROUTE_ANALYSIS_STEPS = 1_500;
+/**
+ * Above this many steps routes are not computed (a diagnostic says so): the basis then has
+ * hundreds of routes, too many to read, and its exact computation grows with steps² × species.
+ */
+export const MAX_ROUTE_ANALYSIS_STEPS = 600;
 /** Direct routes are listed for mechanisms of at most this many steps, unless told otherwise. */
 export const DEFAULT_MAX_ROUTE_STEPS = 40;
 

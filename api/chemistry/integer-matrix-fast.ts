@@ -76,8 +76,11 @@ function toSparse(row: DenseRow): Map<number, number> {
   return sparse;
 }
 
-/** Fully reduced echelon form on numbers; throws Overflow when an entry would leave the safe range. */
-export function reduceNumbers(input: readonly Map<number, bigint>[], columnCount: number): { rows: Map<number, number>[]; pivots: number[] } {
+/**
+ * Echelon form on numbers, fully reduced unless `full` is false (enough for the rank, at about
+ * half the work); throws Overflow when an entry would leave the safe range.
+ */
+export function reduceNumbers(input: readonly Map<number, bigint>[], columnCount: number, full = true): { rows: Map<number, number>[]; pivots: number[] } {
   const remaining = input.filter((row) => row.size > 0).map((row) => toDense(row, columnCount));
   const rows: DenseRow[] = [];
   const pivots: number[] = [];
@@ -86,7 +89,7 @@ export function reduceNumbers(input: readonly Map<number, bigint>[], columnCount
     if (index < 0) continue;
     const [pivotRow] = remaining.splice(index, 1);
     for (const row of remaining) if (row.values[column] !== 0) eliminate(row, pivotRow, column);
-    for (const row of rows) if (row.values[column] !== 0) eliminate(row, pivotRow, column);
+    if (full) for (const row of rows) if (row.values[column] !== 0) eliminate(row, pivotRow, column);
     for (let r = remaining.length - 1; r >= 0; r -= 1) if (remaining[r].nonZero === 0) remaining.splice(r, 1);
     rows.push(pivotRow);
     pivots.push(column);

@@ -1,4 +1,4 @@
-import { Fraction, gcd, lcm } from './fraction';
+import { gcd, lcm } from './fraction';
 import { Overflow, reduceNumbers } from './integer-matrix-fast';
 
 /** A sparse row: column index → non-zero integer. */
@@ -79,19 +79,10 @@ export function reduceBig(input: readonly SparseRow[], columnCount: number): Ech
   return { rows, pivots };
 }
 
-/** Scales rational entries to the smallest integers with the same ratios (gcd 1). */
-export function coprimeIntegers(values: readonly Fraction[]): bigint[] {
-  let denominator = 1n;
-  for (const value of values) denominator = lcm(denominator, value.den);
-  const integers = values.map((value) => (value.num * denominator) / value.den);
-  let divisor = 0n;
-  for (const value of integers) divisor = gcd(divisor, value);
-  return divisor > 1n ? integers.map((value) => value / divisor) : integers;
-}
-
 /**
  * A basis of the null space { x : A x = 0 } of an integer matrix, one coprime integer vector per
- * free column (that column's entry is positive).
+ * free column (that column's entry is positive). With row i of the reduced form holding p_i in its
+ * pivot column c_i, x_f = L and x_{c_i} = −a_{i,f}·L / p_i, where L is the lcm of the |p_i| involved.
  */
 export function nullSpace(input: readonly SparseRow[], columnCount: number): bigint[][] {
   const { rows, pivots } = reduce(input, columnCount);
@@ -99,13 +90,15 @@ export function nullSpace(input: readonly SparseRow[], columnCount: number): big
   const basis: bigint[][] = [];
   for (let free = 0; free < columnCount; free += 1) {
     if (pivotSet.has(free)) continue;
-    const vector = new Array<Fraction>(columnCount).fill(Fraction.ZERO);
-    vector[free] = Fraction.ONE;
-    rows.forEach((row, index) => {
-      const entry = row.get(free);
-      if (entry !== undefined) vector[pivots[index]] = new Fraction(-entry, row.get(pivots[index]) as bigint);
-    });
-    basis.push(coprimeIntegers(vector));
+    const involved = rows.map((row, index) => ({ index, entry: row.get(free), pivot: row.get(pivots[index]) as bigint })).filter((item) => item.entry !== undefined);
+    let scale = 1n;
+    for (const { pivot } of involved) scale = lcm(scale, abs(pivot));
+    const vector = new Array<bigint>(columnCount).fill(0n);
+    vector[free] = scale;
+    for (const { index, entry, pivot } of involved) vector[pivots[index]] = (-(entry as bigint) * scale) / pivot;
+    let divisor = 0n;
+    for (const value of vector) if (value !== 0n) divisor = gcd(divisor, value);
+    basis.push(divisor > 1n ? vector.map((value) => value / divisor) : vector);
   }
   return basis;
 }
@@ -113,7 +106,7 @@ export function nullSpace(input: readonly SparseRow[], columnCount: number): big
 /** Rank of an integer matrix. */
 export function rank(input: readonly SparseRow[], columnCount: number): number {
   try {
-    return reduceNumbers(input, columnCount).pivots.length;
+    return reduceNumbers(input, columnCount, false).pivots.length;
   } catch (error) {
     if (!(error instanceof Overflow)) throw error;
     return reduceBig(input, columnCount).pivots.length;

@@ -3,7 +3,7 @@ import { rank } from './integer-matrix';
 import { orient } from './route-vectors';
 import { netOfRoute } from './routes';
 import type { RegisteredSpecies } from './species-registry';
-import { balancedKeys, rowsFor, type Stoichiometry } from './stoichiometry';
+import { fullRank, rowsFor, type Stoichiometry } from './stoichiometry';
 
 /** Which species routes must cancel, and why (analysis.md, "Routes", step 1). */
 export interface IntermediateChoice {
@@ -38,7 +38,7 @@ export function hasProductiveRoute(stoichiometry: Stoichiometry, intermediates: 
     if (enumerated.complete) return enumerated.routes.some((sigma) => netOfRoute(stoichiometry, orient(sigma, stoichiometry.reversible), skip).size > 0);
   }
   const own = rank(rows, stoichiometry.stepCount);
-  return rank(rowsFor(stoichiometry, balancedKeys(stoichiometry)), stoichiometry.stepCount) > own;
+  return fullRank(stoichiometry) > own;
 }
 
 function closedShellNeutral(species: RegisteredSpecies): boolean {

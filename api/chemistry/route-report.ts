@@ -20,6 +20,8 @@ export interface RouteAnalysis {
   roles: Map<string, SpeciesRole>;
 }
 
+const NOTHING: ReadonlySet<string> = new Set();
+
 interface RouteContext {
   steps: readonly StepModel[];
   stoichiometry: Stoichiometry;
@@ -41,8 +43,8 @@ function numbers(map: ReadonlyMap<string, Fraction>): Record<string, number> {
 
 function routeJson(sigma: bigint[], flags: { direct: boolean; basis: boolean }, context: RouteContext): RouteJson {
   const { stoichiometry, steps } = context;
-  const net = netOfRoute(stoichiometry, sigma, stoichiometry.aside);
-  const everything = netOfRoute(stoichiometry, sigma, new Set());
+  const everything = netOfRoute(stoichiometry, sigma, NOTHING);
+  const net = new Map([...everything].filter(([key]) => !stoichiometry.aside.has(key)));
   const aside = new Map([...everything].filter(([key]) => stoichiometry.aside.has(key)));
   const enthalpy = routeEnthalpy(sigma, context.stepDH, net, context.lookup);
   const multipliers: Record<string, number> = {};

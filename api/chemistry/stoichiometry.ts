@@ -1,5 +1,5 @@
 import { Fraction, lcm } from './fraction';
-import type { SparseRow } from './integer-matrix';
+import { rank, type SparseRow } from './integer-matrix';
 import { netOf, type StepModel } from './step-model';
 
 /** The stoichiometric matrix by species: key → (step index → ν), exact. */
@@ -11,6 +11,8 @@ export interface Stoichiometry {
   columns: Map<string, Fraction>[];
   /** Keys that are not balanced in routes and are reported aside (hν, M). */
   aside: Set<string>;
+  /** Rank of the rows of every balanced species, once computed (see fullRank). */
+  fullRank?: number;
 }
 
 /** Builds ν for every species; photons and M are kept as rows but marked aside. */
@@ -50,6 +52,12 @@ export function rowsFor(stoichiometry: Stoichiometry, keys: Iterable<string>): S
     if (row && row.size > 0) rows.push(integerRow(row));
   }
   return rows;
+}
+
+/** Rank of the rows of all balanced species; computed once per stoichiometry. */
+export function fullRank(stoichiometry: Stoichiometry): number {
+  stoichiometry.fullRank ??= rank(rowsFor(stoichiometry, balancedKeys(stoichiometry)), stoichiometry.stepCount);
+  return stoichiometry.fullRank;
 }
 
 /** Keys of the species that routes balance or report (everything except hν and M). */

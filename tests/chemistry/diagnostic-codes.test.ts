@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyseMechanism } from '@api/chemistry/analyse';
+import { analyseMechanism, MAX_ROUTE_ANALYSIS_STEPS } from '@api/chemistry/analyse';
 import { DIAGNOSTIC_CODES, type DiagnosticCode } from '@api/chemistry/diagnostic-codes';
 import { generateMechanism } from '../../examples/generate-large';
 
@@ -39,7 +39,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'duplicate-step': { text: 'O3 + hν -> O2 + O(3P)\nO3 + hν -> O(3P) + O2', line: 2, column: 1 },
   'suggested-fix': { text: '2 O3 -> 2 O2', line: 1, column: 1 },
   'no-steps': { text: '# nothing yet', line: 1, column: 1 },
-  'routes-too-large': { text: () => generateMechanism(1_501), line: 3, column: 1 },
+  'routes-too-large': { text: () => generateMechanism(MAX_ROUTE_ANALYSIS_STEPS + 1), line: 3, column: 1 },
   'direct-routes-skipped': { text: () => generateMechanism(41), line: 3, column: 1 },
   'direct-routes-limit': { text: explodingMechanism, line: 1, column: 1 },
   'no-productive-route': { text: '%intermediates O3, O2, O(3P)\nO3 + hν -> O2 + O(3P)\nO(3P) + O2 + M -> O3 + M', line: 2, column: 1 },

@@ -42,7 +42,7 @@ function report(state: SteadyState, setup: SteadyStateSetup, method: SteadyState
  * reactants and products keep changing); otherwise every species that is not fixed.
  */
 export function steadyStateNear(setup: SteadyStateSetup): SteadyStateReport {
-  const options = { fixed: setup.held, light: setup.light, rtol: setup.rtol, atol: setup.atol };
+  const options = { fixed: setup.held, light: setup.light, rtol: setup.rtol, atol: setup.atol, horizon: setup.relaxTime };
   const direct = solveSteadyState(setup.system, { ...options, start: setup.start });
   if (direct.converged) return report(direct, setup, 'newton');
   const polished = solveSteadyState(setup.system, { ...options, start: relaxed(setup) });

@@ -36,6 +36,15 @@ describe('the steady state by damped Newton', () => {
     expect(dimer / a ** 2).toBeCloseTo(100, 8);
   });
 
+  it('accepts a point whose rates are negligible over the horizon even where the Jacobian is singular', () => {
+    // With its source A exhausted, B no longer moves: any B is steady, and J has a zero row.
+    const system = systemOf(['G1: A -> B @ 1']);
+    const options = { start: Float64Array.from([0, 0.3]), fixed: Uint8Array.from([1, 0]), light: 1, rtol: 1e-9, atol: 1e-12 };
+    expect(solveSteadyState(system, options).message).toMatch(/singular/);
+    const steady = solveSteadyState(system, { ...options, horizon: 1e9 });
+    expect([steady.converged, steady.concentrations[1]]).toEqual([true, 0.3]);
+  });
+
   it('says so when there is no steady state to find (B keeps growing from a fixed source A)', () => {
     const system = systemOf(['G1: A -> B @ 1']);
     const steady = solveSteadyState(system, { start: Float64Array.from([1, 0]), fixed: Uint8Array.from([1, 0]), light: 1, rtol: 1e-9, atol: 1e-12 });

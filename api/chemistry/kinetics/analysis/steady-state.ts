@@ -13,6 +13,11 @@ export interface SteadyStateOptions {
   light: number;
   rtol: number;
   atol: number;
+  /**
+   * A point where no species would move by more than its tolerance over this many seconds counts
+   * as steady even when the Jacobian there is singular (exhausted reactants); default 0 (off).
+   */
+  horizon?: number;
   maxIterations?: number;
 }
 
@@ -88,6 +93,15 @@ function dampedUpdate(newton: NewtonSystem, c: Float64Array, step: Float64Array,
   return null;
 }
 
+/** True when every free species would change by less than atol + rtol·|c| over the horizon. */
+function negligibleChange(system: RateSystem, c: Float64Array, options: SteadyStateOptions): boolean {
+  const horizon = options.horizon ?? 0;
+  if (horizon <= 0) return false;
+  const rates = new Float64Array(system.speciesCount);
+  massActionDerivative(system, c, options.light, rates, options.fixed);
+  return rates.every((rate, i) => Math.abs(rate) * horizon <= options.atol + options.rtol * Math.abs(c[i]));
+}
+
 function largestRate(system: RateSystem, c: Float64Array, options: SteadyStateOptions): number {
   const rates = new Float64Array(system.speciesCount);
   massActionDerivative(system, c, options.light, rates, options.fixed);
@@ -97,7 +111,7 @@ function largestRate(system: RateSystem, c: Float64Array, options: SteadyStateOp
 /**
  * Steady state of the rate equations by a damped Newton iteration from `start`, with fixed species
  * held and conserved totals kept at their starting values. Converged when the Newton correction is
- * within the tolerances in every species.
+ * within the tolerances in every species, or when the rates are negligible over `horizon`.
  */
 export function solveSteadyState(system: RateSystem, options: SteadyStateOptions): SteadyState {
   const laws = conservationLaws(system, options.fixed);
@@ -107,6 +121,7 @@ export function solveSteadyState(system: RateSystem, options: SteadyStateOptions
     converged, concentrations: c, iterations, residual: largestRate(system, c, options), conservationLaws: laws.length, message,
   });
   for (let iteration = 1; iteration <= (options.maxIterations ?? 50); iteration++) {
+    if (negligibleChange(system, c, options)) return finish(true, iteration - 1, null);
     if (!newton.factorJacobian(c)) return finish(false, iteration, 'the Jacobian is singular at this point');
     const step = newtonStep(newton, c);
     if (scaledSize(step, c, options) <= 1) {

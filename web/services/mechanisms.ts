@@ -114,3 +114,51 @@ export function exportUrl(slug: string, revision: number, format: string, answer
   const query = new URLSearchParams({ format, answers: String(answers) });
   return `/api/exports/mechanisms/${encodeURIComponent(slug)}/revisions/${revision}?${query}`;
 }
+
+/** A row of the library (`GET /api/mechanisms`). */
+export interface MechanismListItem {
+  id: number;
+  slug: string;
+  title: string;
+  tags: string[];
+  visibility: Visibility;
+  latestRevisionNumber: number;
+  updatedAt: string;
+  ownerId: number;
+  ownerName: string;
+  referenceRevision: number | null;
+  roundState: RoundState | null;
+  stepCount: number | null;
+  speciesCount: number | null;
+}
+
+export interface MechanismPage {
+  items: MechanismListItem[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export type LibrarySort = 'updated' | 'created' | 'title' | 'relevance';
+
+/** The library's query (`ListMechanismsQuery` on the server); unset filters are left out. */
+export interface LibraryQuery {
+  q?: string;
+  species?: string;
+  tag?: string;
+  author?: number;
+  visibility?: Visibility;
+  state?: RoundState | 'none';
+  sort?: LibrarySort;
+  order?: 'asc' | 'desc';
+  page?: number;
+  pageSize?: number;
+}
+
+export function listMechanisms(query: LibraryQuery, signal?: AbortSignal): Promise<MechanismPage> {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value !== undefined && value !== '') params.set(key, String(value));
+  }
+  return http.get<MechanismPage>(`/api/mechanisms?${params}`, { signal });
+}

@@ -50,12 +50,25 @@ function passThirdBodyToFalloff(tree: MathNode): MathNode {
   });
 }
 
+/** Compiled expressions by text, oldest first: mechanisms are simulated again and again. */
+const cache = new Map<string, CompiledRate | RateExpressionError>();
+const CACHE_SIZE = 5000;
+
 /**
  * Compiles a rate expression (the text after `@`, or one side of `forward | reverse`) in the
- * locked-down mathjs instance. Returns either a compiled rate or `{ error, column }`, the column
- * counted from 1 at the start of `text`.
+ * locked-down mathjs instance, once per distinct text (a bounded cache). Returns either a compiled
+ * rate or `{ error, column }`, the column counted from 1 at the start of `text`.
  */
 export function compileRateExpression(text: string): CompiledRate | RateExpressionError {
+  const known = cache.get(text);
+  if (known) return known;
+  const compiled = compileUncached(text);
+  if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+  cache.set(text, compiled);
+  return compiled;
+}
+
+function compileUncached(text: string): CompiledRate | RateExpressionError {
   if (text.trim() === '') return { ok: false, error: 'the rate expression is empty', column: 1 };
   let tree: MathNode;
   try {

@@ -6,6 +6,7 @@ import type { BenchRow, BenchSuite } from './types';
  */
 const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   engine: () => import('./engine'),
+  exports: () => import('./exports'),
   kinetics: () => import('./kinetics'),
   repository: () => import('./repository'),
 };

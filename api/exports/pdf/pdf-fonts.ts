@@ -9,15 +9,15 @@ const require = createRequire(import.meta.url);
  * Fonts embedded in PDF worksheets, shipped as npm packages (no download at run time).
  * pdfkit embeds TrueType/OpenType; @fontsource/noto-sans ships only WOFF/WOFF2 files split into
  * script subsets, so the full Noto Sans TTFs come from @embedpdf/fonts-latin (OFL-1.1). Noto Sans
- * has no arrows (→ ⇌); those glyphs come from Noto Sans Math (@fontsource/noto-sans-math, a
- * WOFF that fontkit reads).
+ * has no arrows (→ ⇌); those glyphs come from Noto Sans Math (@fontsource/noto-sans-math). Its
+ * WOFF2 file, not the WOFF: fontkit inflates a WOFF table again on every read, a WOFF2 once.
  */
 const notoDir = path.join(path.dirname(require.resolve('@embedpdf/fonts-latin')), '..', 'fonts');
 
 export const PDF_FONT_FILES = {
   text: path.join(notoDir, 'NotoSans-Regular.ttf'),
   bold: path.join(notoDir, 'NotoSans-Bold.ttf'),
-  symbols: require.resolve('@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff'),
+  symbols: require.resolve('@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff2'),
 } as const;
 
 export type PdfFontName = keyof typeof PDF_FONT_FILES;

@@ -65,6 +65,18 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'To adopt', roles: ['curator'] },
   },
   {
+    path: '/m/:slug/compare',
+    name: 'compare',
+    component: () => import('@web/views/CompareView.vue'),
+    meta: { title: 'Compare revisions' },
+  },
+  {
+    path: '/dev/inbox',
+    name: 'dev-inbox',
+    component: () => import('@web/views/InboxView.vue'),
+    meta: { title: 'Development inbox', roles: ['admin'] },
+  },
+  {
     path: '/forbidden',
     name: 'forbidden',
     component: () => import('@web/views/ForbiddenView.vue'),

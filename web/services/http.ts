@@ -30,6 +30,9 @@ export function configureHttp(next: Partial<HttpHooks>): void {
   hooks = { ...hooks, ...next };
 }
 
+/** The session's CSRF token, for requests that cannot go through `request` (upload progress needs XMLHttpRequest). */
+export const csrfToken = (): string => hooks.csrfToken();
+
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   body?: unknown;
@@ -45,9 +48,14 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
   const response = await send(path, method, options);
   if (response.ok) return readSuccess<T>(response);
   const error = await readError(response);
-  if (error.status === 401 && options.handleUnauthorized !== false) hooks.onUnauthorized(error);
-  if (error.status === 403 && error.code === CSRF_INVALID) hooks.onCsrfRejected(error);
+  reportSessionProblem(error, options.handleUnauthorized !== false);
   throw error;
+}
+
+/** Tells the app about a lost session (401) or a stale CSRF token, as every request does. */
+export function reportSessionProblem(error: ApiError, handleUnauthorized = true): void {
+  if (error.status === 401 && handleUnauthorized) hooks.onUnauthorized(error);
+  if (error.status === 403 && error.code === CSRF_INVALID) hooks.onCsrfRejected(error);
 }
 
 async function send(path: string, method: string, options: RequestOptions): Promise<Response> {
@@ -76,12 +84,16 @@ async function readSuccess<T>(response: Response): Promise<T> {
 
 async function readError(response: Response): Promise<ApiError> {
   const body = await response.json().catch(() => null);
+  return errorFromResponse(response.status, response.statusText, body);
+}
+
+/** The ApiError for a failed response and its parsed body (null when the body was not JSON). */
+export function errorFromResponse(status: number, statusText: string, body: unknown): ApiError {
   if (isErrorBody(body)) {
     const { code, message, details } = body.error;
-    return new ApiError(response.status, code, message || `The server refused the request (${code}).`, details);
+    return new ApiError(status, code, message || `The server refused the request (${code}).`, details);
   }
-  const reason = response.statusText || 'no reason given';
-  return new ApiError(response.status, `HTTP_${response.status}`, `The server answered ${response.status} (${reason}).`);
+  return new ApiError(status, `HTTP_${status}`, `The server answered ${status} (${statusText || 'no reason given'}).`);
 }
 
 function isErrorBody(body: unknown): body is ApiErrorBody {

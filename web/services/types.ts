@@ -1,21 +1,13 @@
 /**
- * Shapes of the platform API as the web client sees them.
- * Kept in one file so that switching to the types inferred from the server's
- * zod schemas later touches only this module.
+ * Shapes of the platform API as the web client sees them. Users and roles are the types the
+ * server's zod schemas infer (types only: no server code reaches the bundle).
  */
+import type { Role, User } from '@api/users/users.schemas';
 
-export const ROLES = ['author', 'reviewer', 'curator', 'instructor', 'admin'] as const;
+export type { Role, User };
 
-export type Role = (typeof ROLES)[number];
-
-export interface User {
-  id: number;
-  name: string;
-  email: string;
-  roles: Role[];
-  githubLogin: string | null;
-  createdAt: string;
-}
+/** The roles in the server's order (`ROLES` of users.schemas.ts; a value import would pull zod into the bundle). */
+export const ROLES = ['author', 'reviewer', 'curator', 'instructor', 'admin'] as const satisfies readonly Role[];
 
 export interface SessionInfo {
   user: User | null;

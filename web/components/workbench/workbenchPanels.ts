@@ -9,4 +9,7 @@ export const workbenchPanels: WorkbenchPanel[] = [
   { id: 'steps', label: 'Steps', icon: 'pi pi-list', component: () => import('./WorkbenchStepsPanel.vue') },
   { id: 'species', label: 'Species', icon: 'pi pi-circle', component: () => import('./WorkbenchSpeciesPanel.vue') },
   { id: 'routes', label: 'Routes', icon: 'pi pi-sync', component: () => import('./WorkbenchRoutesPanel.vue') },
+  { id: 'review', label: 'Review', icon: 'pi pi-flag', component: () => import('./review/WorkbenchReviewPanel.vue') },
+  { id: 'remarks', label: 'Remarks', icon: 'pi pi-comments', component: () => import('./review/WorkbenchRemarksPanel.vue') },
+  { id: 'history', label: 'History', icon: 'pi pi-history', component: () => import('./history/WorkbenchHistoryPanel.vue') },
 ];

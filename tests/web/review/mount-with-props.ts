@@ -1,0 +1,32 @@
+import { flushPromises, mount } from '@vue/test-utils';
+import { vi } from 'vitest';
+import { createMemoryHistory } from 'vue-router';
+import type { Component } from 'vue';
+import { installPrimeVue } from '@web/plugins/primevue';
+import { createAppRouter } from '@web/router';
+import { freshPinia } from '../mount-app';
+
+vi.setConfig({ testTimeout: 30_000 });
+
+// PrimeVue's Select listens to orientation changes; jsdom has no matchMedia.
+window.matchMedia ??= ((query: string) => ({
+  matches: false, media: query, onchange: null, addEventListener: () => {}, removeEventListener: () => {},
+  addListener: () => {}, removeListener: () => {}, dispatchEvent: () => false,
+})) as typeof window.matchMedia;
+
+// Textarea's auto-resize watches its size; jsdom lays nothing out.
+globalThis.ResizeObserver ??= class {
+  observe() {}
+  unobserve() {}
+  disconnect() {}
+} as unknown as typeof ResizeObserver;
+
+/** Mounts a component with props and the app's real plugins (router on memory history at `path`). */
+export async function mountWithProps(component: Component, props: Record<string, unknown>, path = '/account') {
+  const pinia = freshPinia();
+  const router = createAppRouter(pinia, createMemoryHistory());
+  await router.push(path);
+  const wrapper = mount(component, { props, attachTo: document.body, global: { plugins: [pinia, router, { install: installPrimeVue }] } });
+  await flushPromises();
+  return { wrapper, router, pinia };
+}

@@ -61,3 +61,6 @@ export const SimulationParams = z.object({ id: z.string().uuid() });
 
 export const SIMULATION_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
 export type SimulationStatus = (typeof SIMULATION_STATUSES)[number];
+
+// The web shows what the API returns: it takes the result type from here (types only, no engine code).
+export type { SimulationResult } from '../chemistry/kinetics/simulation-types';

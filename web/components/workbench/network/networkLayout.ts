@@ -3,7 +3,7 @@ import type { Core, CytoscapeOptions, LayoutOptions } from 'cytoscape';
 /** Past this many nodes the graph takes the fast path: a draft layout and a lighter renderer. */
 export const LARGE_GRAPH_NODES = 500;
 
-type CytoscapeFactory = typeof import('cytoscape').default;
+type CytoscapeFactory = typeof import('cytoscape');
 let loading: Promise<CytoscapeFactory> | null = null;
 
 /** cytoscape and the fCoSE layout, fetched on first use so they stay out of the first screen's bundle. */

@@ -1,0 +1,77 @@
+import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
+import type { Core, ElementDefinition, EventObject } from 'cytoscape';
+import type { NetworkModel } from '@web/components/workbench/network/networkModel';
+import { loadCytoscape, rendererOptions, runLayout } from '@web/components/workbench/network/networkLayout';
+import { networkStyle } from '@web/components/workbench/network/networkStyle';
+import { downloadBlob, graphToSvg } from '@web/components/workbench/network/networkSnapshot';
+
+function elementsOf(model: NetworkModel): ElementDefinition[] {
+  return [
+    ...model.nodes.map((data) => ({ group: 'nodes' as const, data: { ...data } })),
+    ...model.edges.map((data) => ({ group: 'edges' as const, data: { ...data } })),
+  ];
+}
+
+const structureOf = (model: NetworkModel) => `${model.nodes.map((n) => n.id).join('|')}#${model.edges.map((e) => e.id).join('|')}`;
+
+/**
+ * A cytoscape graph in `container`, kept in step with `model`: a new structure is laid out again;
+ * a new route, selection or flux only updates the elements' data, so the picture stays put.
+ */
+export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<NetworkModel>, onStepClick: (step: string) => void) {
+  const cy = shallowRef<Core | null>(null);
+  const status = ref<'loading' | 'ready' | 'error'>('loading');
+  const hovered = ref<{ label: string; role: string | null } | null>(null);
+  let structure = '';
+
+  async function create(element: HTMLElement): Promise<void> {
+    const cytoscape = await loadCytoscape();
+    const nodeCount = model.value.nodes.length;
+    const instance = cytoscape({ container: element, style: networkStyle, elements: [], ...rendererOptions(nodeCount) });
+    instance.on('tap', 'node[kind = "step"]', (event: EventObject) => onStepClick(String(event.target.data('step'))));
+    instance.on('mouseover', 'node', (event: EventObject) => {
+      hovered.value = { label: String(event.target.data('key') ?? event.target.data('step')), role: event.target.data('role') ?? null };
+    });
+    instance.on('mouseout', 'node', () => (hovered.value = null));
+    cy.value = instance;
+    await sync(model.value);
+    status.value = 'ready';
+  }
+
+  async function sync(next: NetworkModel): Promise<void> {
+    const instance = cy.value;
+    if (!instance) return;
+    const nextStructure = structureOf(next);
+    if (nextStructure !== structure) {
+      structure = nextStructure;
+      instance.batch(() => {
+        instance.elements().remove();
+        instance.add(elementsOf(next));
+      });
+      await runLayout(instance);
+      return;
+    }
+    instance.batch(() => {
+      for (const data of [...next.nodes, ...next.edges]) instance.getElementById(data.id).data({ ...data });
+    });
+  }
+
+  watch(container, (element) => {
+    if (element && !cy.value) create(element).catch(() => (status.value = 'error'));
+  }, { immediate: true });
+  watch(model, (next) => void sync(next));
+  onBeforeUnmount(() => cy.value?.destroy());
+
+  async function exportPng(fileName: string): Promise<void> {
+    const blob = await cy.value?.png({ output: 'blob-promise', full: true, scale: 2, bg: '#ffffff' });
+    if (blob) downloadBlob(blob, fileName);
+  }
+
+  function exportSvg(fileName: string): void {
+    if (cy.value) downloadBlob(new Blob([graphToSvg(cy.value)], { type: 'image/svg+xml' }), fileName);
+  }
+
+  const fit = () => cy.value?.fit(undefined, 24);
+
+  return { cy, status, hovered, exportPng, exportSvg, fit };
+}

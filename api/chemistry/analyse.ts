@@ -43,6 +43,16 @@ function buildSteps(nodes: ReturnType<typeof parseMechanism>['steps'], registry:
   return steps;
 }
 
+/** Parses and builds the steps; the parse tree is not kept (the steps keep what they need of it). */
+function readMechanism(text: string) {
+  const parsed = parseMechanism(text);
+  const diagnostics = [...parsed.diagnostics];
+  const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
+  const registry = new SpeciesRegistry(settings.declarations, diagnostics);
+  const steps = buildSteps(parsed.steps, registry, diagnostics);
+  return { diagnostics, settings, registry, steps };
+}
+
 function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: EnthalpyLookup): SpeciesJson {
   const entry = item.kind === 'species' ? lookup(item.key) : null;
   const { key, formula, name, kind, elements, charge, sites, electrons, radical, reactive, declared, opaque, firstLine } = item;
@@ -66,7 +76,7 @@ function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: Registe
   }
   const intermediates = formedAndConsumedKeys(steps, species, settings.terminal);
   const message = `routes are computed for up to ${MAX_ROUTE_ANALYSIS_STEPS} steps; this mechanism has ${steps.length}`;
-  diagnostics.push(finding('routes-too-large', steps[0].node, message));
+  diagnostics.push(finding('routes-too-large', steps[0].source, message));
   const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;
   return { intermediates, explanation, routes: [], overall: null, roles: assignRoles(species, steps, null, new Map()) };
 }
@@ -83,11 +93,7 @@ function emptyRoutes(diagnostics: Diagnostic[]): RouteAnalysis {
  */
 export function analyseMechanism(text: string, options: AnalyseOptions = {}): MechanismAnalysis {
   const lookup = cachedLookup(options.enthalpy ?? builtinEnthalpy);
-  const parsed = parseMechanism(text);
-  const diagnostics = [...parsed.diagnostics];
-  const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
-  const registry = new SpeciesRegistry(settings.declarations, diagnostics);
-  const steps = buildSteps(parsed.steps, registry, diagnostics);
+  const { diagnostics, settings, registry, steps } = readMechanism(text);
   const species = registry.all();
   const stepJson = steps.map((step) => reportStep(step, lookup, species, diagnostics));
   reportDuplicates(steps, stepJson.map((step) => step.normalised), diagnostics);

@@ -17,16 +17,16 @@ export function reportDuplicates(steps: readonly StepModel[], normalised: readon
   const labels = new Map<string, StepModel>();
   const equations = new Map<string, StepModel>();
   steps.forEach((step, index) => {
-    if (step.label && step.node.label) {
+    if (step.label && step.source.label) {
       const first = labels.get(step.label);
-      if (first) diagnostics.push(finding('duplicate-label', step.node.label, `label ${step.label} is already used on line ${first.node.line}`, { found: step.label }));
+      if (first) diagnostics.push(finding('duplicate-label', step.source.label, `label ${step.label} is already used on line ${first.source.line}`, { found: step.label }));
       else labels.set(step.label, step);
     }
     const reverse = step.reversible ? normalisedText(shown(step.products), shown(step.reactants), true) : null;
     const first = equations.get(normalised[index]) ?? (reverse ? equations.get(reverse) : undefined);
     if (first) {
-      const message = `step ${step.id} repeats step ${first.id} (line ${first.node.line})`;
-      diagnostics.push(finding('duplicate-step', step.node, message, { found: normalised[index] }));
+      const message = `step ${step.id} repeats step ${first.id} (line ${first.source.line})`;
+      diagnostics.push(finding('duplicate-step', step.source, message, { found: normalised[index] }));
     } else equations.set(normalised[index], step);
   });
 }

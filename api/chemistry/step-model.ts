@@ -1,4 +1,4 @@
-import type { StepNode, TermNode } from '@grammar/ast';
+import type { RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { Fraction } from './fraction';
@@ -11,6 +11,19 @@ export interface StepTerm {
   coef: Fraction;
 }
 
+/**
+ * Where a step was written: all that the checks need of its parse tree, so that the tree itself
+ * can be dropped once the steps are built.
+ */
+export interface StepSource {
+  line: number;
+  column: number;
+  label: SourceToken | null;
+  rate: RateNode | null;
+  /** The first hν written among the products (a mistake reported by the step rules). */
+  productPhoton: { line: number; column: number; text: string } | null;
+}
+
 /** A well-formed step, ready for the checks and the routes. */
 export interface StepModel {
   /** Position among the analysed steps (0-based). */
@@ -18,7 +31,7 @@ export interface StepModel {
   /** The label, or `#n` for the n-th step when it has none. */
   id: string;
   label: string | null;
-  node: StepNode;
+  source: StepSource;
   reversible: boolean;
   reactants: StepTerm[];
   products: StepTerm[];
@@ -79,7 +92,10 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   const reactants = mergeSide(left, registry);
   const products = mergeSide(right, registry);
   const label = node.label?.text ?? null;
-  return { index: -1, id: label ?? `#${position}`, label, node, reversible: node.reversible, reactants, products, terms: [...reactants, ...products] };
+  const photon = node.products.find((term) => term.particle.kind === 'photon')?.particle;
+  const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;
+  const source = { line: node.line, column: node.column, label: node.label, rate: node.rate, productPhoton };
+  return { index: -1, id: label ?? `#${position}`, label, source, reversible: node.reversible, reactants, products, terms: [...reactants, ...products] };
 }
 
 /** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */

@@ -26,13 +26,13 @@ function signed(value: number): string {
 function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
   for (const [symbol, delta] of Object.entries(balance.imbalance)) {
     const message = `step ${step.id} does not conserve ${symbol}: products − reactants = ${signed(delta)}`;
-    diagnostics.push(finding('element-imbalance', step.node, message, { found: `${symbol} ${signed(delta)}`, expected: [`${symbol} 0`] }));
+    diagnostics.push(finding('element-imbalance', step.source, message, { found: `${symbol} ${signed(delta)}`, expected: [`${symbol} 0`] }));
   }
   if (balance.chargeDelta !== 0) {
-    diagnostics.push(finding('charge-imbalance', step.node, `step ${step.id} changes the charge by ${signed(balance.chargeDelta)}`, { found: signed(balance.chargeDelta), expected: ['0'] }));
+    diagnostics.push(finding('charge-imbalance', step.source, `step ${step.id} changes the charge by ${signed(balance.chargeDelta)}`, { found: signed(balance.chargeDelta), expected: ['0'] }));
   }
   if (balance.siteDelta !== 0) {
-    diagnostics.push(finding('site-imbalance', step.node, `step ${step.id} changes the number of surface sites by ${signed(balance.siteDelta)}`, { found: signed(balance.siteDelta), expected: ['0'] }));
+    diagnostics.push(finding('site-imbalance', step.source, `step ${step.id} changes the number of surface sites by ${signed(balance.siteDelta)}`, { found: signed(balance.siteDelta), expected: ['0'] }));
   }
 }
 
@@ -52,13 +52,13 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
     ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
     : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
   const fixed = fixedEquation(step, fix);
-  diagnostics.push(finding('suggested-fix', step.node, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
+  diagnostics.push(finding('suggested-fix', step.source, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }
 
 function reportOpaque(step: StepModel, diagnostics: Diagnostic[]): void {
   const opaque = step.terms.filter((term) => term.species.opaque).map((term) => term.species.key);
   if (opaque.length === 0) return;
-  diagnostics.push(finding('opaque-species', step.node, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
+  diagnostics.push(finding('opaque-species', step.source, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }
 
 /** Checks one step and builds its JSON; diagnostics go to `diagnostics`. */
@@ -70,12 +70,12 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
   checkStepRules(step, diagnostics);
   const stepClass = reportClass(step, diagnostics);
   const enthalpy = stepEnthalpy(step, lookup);
-  const node = step.node;
+  const source = step.source;
   return {
     label: step.label,
     id: step.id,
-    line: node.line,
-    column: node.column,
+    line: source.line,
+    column: source.column,
     equation: equationText(shown(step.reactants), shown(step.products), step.reversible),
     normalised: normalisedStep(step),
     reversible: step.reversible,
@@ -90,6 +90,6 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     thresholdNm: enthalpy.thresholdNm,
     missingEnthalpies: enthalpy.missing,
     usedEnthalpies: enthalpy.used,
-    rate: node.rate ? { forward: node.rate.forward, reverse: node.rate.reverse, line: node.rate.line, column: node.rate.column } : null,
+    rate: source.rate ? { forward: source.rate.forward, reverse: source.rate.reverse, line: source.rate.line, column: source.rate.column } : null,
   };
 }

@@ -43,21 +43,21 @@ function thirdBodyCount(terms: readonly StepTerm[]): number {
 
 /** The photon, third-body, molecularity and lumping rules of one step. */
 export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void {
-  const node = step.node;
-  const photon = node.products.find((term) => term.particle.kind === 'photon');
-  if (photon) diagnostics.push(finding('photon-on-product-side', photon.particle, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.particle.text }));
+  const source = step.source;
+  const photon = source.productPhoton;
+  if (photon) diagnostics.push(finding('photon-on-product-side', photon, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.text }));
   const before = thirdBodyCount(step.reactants);
   const after = thirdBodyCount(step.products);
   if (before !== after || before > 1) {
     const message = `M must appear once on each side (step ${step.id} has ${before} on the left and ${after} on the right)`;
-    diagnostics.push(finding('third-body-unpaired', node, message, { found: `${before} M → ${after} M`, expected: ['M on both sides, once each'] }));
+    diagnostics.push(finding('third-body-unpaired', source, message, { found: `${before} M → ${after} M`, expected: ['M on both sides, once each'] }));
   }
   const count = molecularity(step);
-  if (count > 3) diagnostics.push(finding('molecularity-above-three', node, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
+  if (count > 3) diagnostics.push(finding('molecularity-above-three', source, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
   const lumped = step.terms.filter((term) => !term.coef.isInteger());
   if (lumped.length > 0) {
     const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
-    diagnostics.push(finding('not-elementary', node, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
+    diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
   }
 }
 
@@ -65,7 +65,7 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
 export function reportClass(step: StepModel, diagnostics: Diagnostic[]): StepClass {
   const { stepClass, before, after } = classify(step);
   if (stepClass === 'initiation' || stepClass === 'branching' || stepClass === 'termination') {
-    diagnostics.push(finding('step-class', step.node, `step ${step.id} is ${stepClass === 'initiation' ? 'an' : 'a'} ${stepClass} step: radicals ${before} → ${after}`));
+    diagnostics.push(finding('step-class', step.source, `step ${step.id} is ${stepClass === 'initiation' ? 'an' : 'a'} ${stepClass} step: radicals ${before} → ${after}`));
   }
   return stepClass;
 }

@@ -26,6 +26,7 @@ export function initialVector(model: KineticModel, initial: Record<string, numbe
   return y0;
 }
 
+/** 1 for each species to hold at its initial concentration; an unknown key is an error naming it. */
 export function fixedMask(model: KineticModel, fixed: string[] = []): Uint8Array {
   const mask = new Uint8Array(model.species.length);
   fixed.forEach((key, k) => {

@@ -1,8 +1,6 @@
 /** Concentration units of `%units` (step-notation.md); time is always in seconds. */
 export type ConcentrationUnit = 'molecule cm^-3' | 'mol L^-1' | 'mol m^-2';
 
-export const DEFAULT_UNIT: ConcentrationUnit = 'molecule cm^-3';
-
 /** Boltzmann constant, J K⁻¹ (CODATA 2018, exact in the 2019 SI). */
 export const BOLTZMANN = 1.380649e-23;
 /** Avogadro constant, mol⁻¹ (CODATA 2018, exact in the 2019 SI). */

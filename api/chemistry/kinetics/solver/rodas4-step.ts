@@ -16,6 +16,7 @@ export interface StepWork {
   solver: IterationSolver;
 }
 
+/** Allocates the scratch arrays and the stage solver for a problem (once per integration). */
 export function allocateStepWork(problem: StiffProblem): StepWork {
   const n = problem.size;
   const vector = () => new Float64Array(n);

@@ -1,10 +1,10 @@
 import { Router, type Response } from 'express';
 import type { Knex } from 'knex';
-import { z } from 'zod';
 import { requireUser } from '../middleware/require-auth';
 import { RevisionParams } from '../revisions/revisions.schemas';
 import { SetParams } from '../sets/sets.schemas';
-import { ExportDocument, ExportQuery } from './exports.schemas';
+import { exportJsonSchema } from './export-json-schema';
+import { ExportQuery } from './exports.schemas';
 import * as service from './exports.service';
 
 function send(res: Response, file: { contentType: string; filename: string; body: string | Buffer }): void {
@@ -30,12 +30,7 @@ export function exportsRoutes(db: Knex): Router {
   return router;
 }
 
-/** The JSON Schema of exports, generated from the zod schema; public, at a stable address. */
-export const exportJsonSchema = () => ({
-  title: 'Cyclewright mechanism export, version 1',
-  ...z.toJSONSchema(ExportDocument),
-});
-
+/** Mounted at /api/schemas: the published JSON Schema of exports, public, at a stable address. */
 export function schemasRoutes(): Router {
   const router = Router();
   const schema = exportJsonSchema();

@@ -8,7 +8,7 @@ import MarkdownIt from 'markdown-it';
 import { mhchemParser } from 'mhchemparser';
 import { describe, expect, it } from 'vitest';
 import { csvField, renderCsv } from '@api/exports/csv';
-import { exportJsonSchema } from '@api/exports/exports.routes';
+import { exportJsonSchema } from '@api/exports/export-json-schema';
 import { ExportDocument } from '@api/exports/exports.schemas';
 import { renderLatex, texText } from '@api/exports/latex';
 import { renderMarkdown } from '@api/exports/markdown';

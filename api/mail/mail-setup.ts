@@ -24,7 +24,12 @@ export async function setUpMail(env: AppEnv, db: Knex, logger: Logger) {
     });
     if (fake) logger.info(`Fake SMTP on 127.0.0.1:${fake.port}; captured mail at /api/dev/inbox (development only)`);
   }
-  const transport: MailTransport = createMailTransport({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
+  const transport: MailTransport = createMailTransport({
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    from: env.MAIL_FROM,
+    publicUrl: env.PUBLIC_URL ?? `http://127.0.0.1:${env.PORT}`,
+  });
   const retry = setInterval(() => {
     deliverOutbox(db, transport).catch((error) => logger.warn({ err: error }, 'mail outbox delivery failed'));
   }, RETRY_EVERY_MS);

@@ -4,6 +4,15 @@ export interface MailSettings {
   host: string;
   port: number;
   from: string;
+  /** Where people open the app; relative links in messages (`/m/…`) are made absolute with it. */
+  publicUrl?: string;
+}
+
+/** Messages are composed with app-relative links; a mail reader needs the full address. */
+export function absoluteLinks(text: string, publicUrl: string | undefined): string {
+  if (!publicUrl) return text;
+  const base = publicUrl.replace(/\/+$/, '');
+  return text.replace(/(^|\s)(\/m\/\S+)/g, (_all, before: string, path: string) => `${before}${base}${path}`);
 }
 
 export interface MailTransport {
@@ -24,7 +33,7 @@ export function createMailTransport(settings: MailSettings): MailTransport {
   });
   return {
     async send(message) {
-      await transporter.sendMail({ from: settings.from, ...message });
+      await transporter.sendMail({ from: settings.from, ...message, text: absoluteLinks(message.text, settings.publicUrl) });
     },
     close: () => transporter.close(),
   };

@@ -11,6 +11,8 @@ export interface LineContext {
   diagnostics: Diagnostic[];
   /** Formulas already converted in this text, by formula text (shared, position-free). */
   formulas: Map<string, readonly FormulaPart[]>;
+  /** Tokens the Earley parser may still read for this text (see limits.ts); −1 once spent. */
+  budget: { tokens: number };
 }
 
 const NO_STATES: readonly string[] = Object.freeze([]);

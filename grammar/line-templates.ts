@@ -45,3 +45,21 @@ export function templateOf(signature: string, tokens: readonly Token[], tree: un
   if (keep) templates.set(signature, template);
   return template;
 }
+
+/** Where parsing failed for a token-type sequence: the unexpected token's index (null: the line ended) and what was expected. */
+export interface KnownFailure {
+  tokenIndex: number | null;
+  expected: string[];
+}
+
+const failures = new Map<string, KnownFailure>();
+
+/** The failure of a line with the same token types, if one was parsed before (faulty lines cost no second parse). */
+export function knownFailure(signature: string): KnownFailure | undefined {
+  return failures.get(signature);
+}
+
+export function rememberFailure(signature: string, failure: KnownFailure): void {
+  if (failures.size >= MAX_TEMPLATES) failures.clear();
+  failures.set(signature, failure);
+}

@@ -5,17 +5,15 @@ import { convertDirective, convertStep } from './convert-line';
 import type { LineContext } from './convert-species';
 import { diagnostic, PARSER_CODES } from './diagnostics';
 import type { RawLine } from './raw';
-import { knownTemplate, signatureOf, templateOf } from './line-templates';
+import { knownFailure, knownTemplate, rememberFailure, signatureOf, templateOf, type KnownFailure } from './line-templates';
 import grammar, { lexer } from './steps.generated';
+import { budgetSpent, lineTooLong, PARSE_TOKEN_BUDGET, textTooLarge, tooComplex } from './limits';
 import { expectedAt, syntaxDiagnostic, unbalancedBracket } from './syntax-errors';
 
 export type * from './ast';
 export type { Diagnostic, Severity } from './diagnostics';
 
-/** Largest text accepted (characters): about 120k typical steps. */
-export const MAX_TEXT_CHARS = 8_000_000;
-/** Longest line accepted (characters); bounds the work spent on any one line. */
-export const MAX_LINE_CHARS = 2_000;
+export { MAX_LINE_CHARS, MAX_LINE_TOKENS, MAX_NESTING, MAX_TEXT_CHARS, PARSE_TOKEN_BUDGET } from './limits';
 
 const KNOWN_DIRECTIVES = ['title', 'units', 'conditions', 'terminal', 'intermediates', 'species'];
 const BLANK_OR_COMMENT = /^\s*(?:#.*)?$/;
@@ -34,16 +32,17 @@ export function parseMechanism(text: string): ParsedMechanism {
     parsed.diagnostics.push(diagnostic('error', PARSER_CODES.inputTooLarge, { line: 1, column: 1 }, 'the mechanism must be text'));
     return parsed;
   }
-  if (text.length > MAX_TEXT_CHARS) {
-    const message = `the text has ${text.length} characters; the limit is ${MAX_TEXT_CHARS}`;
-    parsed.diagnostics.push(diagnostic('error', PARSER_CODES.inputTooLarge, { line: 1, column: 1 }, message));
+  const tooLarge = textTooLarge(text);
+  if (tooLarge) {
+    parsed.diagnostics.push(tooLarge);
     return parsed;
   }
   const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
   parsed.lineCount = lines.length;
   const formulas = new Map();
+  const budget = { tokens: PARSE_TOKEN_BUDGET };
   for (let index = 0; index < lines.length; index += 1) {
-    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas };
+    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas, budget };
     try {
       parseLine(context, parsed);
     } catch (error) {
@@ -56,14 +55,19 @@ export function parseMechanism(text: string): ParsedMechanism {
 
 function parseLine(context: LineContext, parsed: ParsedMechanism): void {
   const { text, line } = context;
-  if (text.length > MAX_LINE_CHARS) {
-    const message = `the line has ${text.length} characters; the limit is ${MAX_LINE_CHARS}`;
-    parsed.diagnostics.push(diagnostic('error', PARSER_CODES.lineTooLong, { line, column: MAX_LINE_CHARS + 1 }, message));
+  const tooLong = lineTooLong(text, line);
+  if (tooLong) {
+    parsed.diagnostics.push(tooLong);
     return;
   }
   if (BLANK_OR_COMMENT.test(text)) return;
   if (!directiveIsKnown(context)) return;
   context.tokens = lexLine(text);
+  const complex = tooComplex(context.tokens, line);
+  if (complex) {
+    parsed.diagnostics.push(complex);
+    return;
+  }
   const raw = runGrammar(context);
   if (!raw) return;
   if (raw.kind === 'step') parsed.steps.push(convertStep(raw, context));
@@ -105,6 +109,14 @@ function runGrammar(context: LineContext): RawLine | null {
   const known = knownTemplate(signature);
   if (known !== undefined) return known as RawLine;
   const tokens = context.tokens;
+  const failed = knownFailure(signature);
+  if (failed) return reportFailure(context, failed);
+  if (context.budget.tokens < tokens.length) {
+    if (context.budget.tokens >= 0) context.diagnostics.push(budgetSpent(context.line));
+    context.budget.tokens = -1;
+    return null;
+  }
+  context.budget.tokens -= tokens.length;
   const parser = new nearley.Parser(compiled, { lexer: replayLexer(tokens) });
   // nearley's own error text walks the whole parse table; only the position is needed here.
   Object.assign(parser, { reportError: () => 'syntax error', reportLexerError: () => 'syntax error' });
@@ -112,18 +124,22 @@ function runGrammar(context: LineContext): RawLine | null {
   try {
     parser.feed(context.text);
   } catch (error) {
-    const token = (error as { token?: Token }).token ?? null;
-    reportSyntax(context, token, expectedAt(parser, table.length - 2));
-    return null;
+    const token = (error as { token?: Token }).token;
+    const failure = { tokenIndex: token ? tokens.indexOf(token) : null, expected: expectedAt(parser, table.length - 2) };
+    rememberFailure(signature, failure);
+    return reportFailure(context, failure);
   }
   if (parser.results.length === 0) {
-    reportSyntax(context, null, expectedAt(parser, table.length - 1));
-    return null;
+    const failure = { tokenIndex: null, expected: expectedAt(parser, table.length - 1) };
+    rememberFailure(signature, failure);
+    return reportFailure(context, failure);
   }
   return templateOf(signature, tokens, parser.results[0], parser.results.length === 1) as RawLine;
 }
 
-function reportSyntax(context: LineContext, token: Token | null, expected: string[]): void {
+function reportFailure(context: LineContext, failure: KnownFailure): null {
+  const token = failure.tokenIndex === null ? null : (context.tokens[failure.tokenIndex] ?? null);
   const bracket = unbalancedBracket(context.text, context.line);
-  context.diagnostics.push(bracket ?? syntaxDiagnostic(context.line, token, context.text, expected));
+  context.diagnostics.push(bracket ?? syntaxDiagnostic(context.line, token, context.text, failure.expected));
+  return null;
 }

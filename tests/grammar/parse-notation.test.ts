@@ -141,6 +141,12 @@ describe('parseMechanism: rejected notation', () => {
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });
   });
 
+  it('bounds the work on one line: too many tokens, or brackets nested too deep', () => {
+    expect(parseMechanism(`${'O•'.repeat(400)} -> O2`).diagnostics[0]).toMatchObject({ code: 'line-too-long', line: 1 });
+    expect(parseMechanism(`${'('.repeat(9)}CH3${')'.repeat(9)} -> CH3`).diagnostics[0]).toMatchObject({ code: 'syntax-error', column: 9 });
+    expect(parseMechanism(`${'('.repeat(8)}CH3${')'.repeat(8)} -> CH3`).diagnostics).toEqual([]);
+  });
+
   it('reports a text that is too large and reads none of it', () => {
     const parsed = parseMechanism('A -> B\n'.repeat(1_200_000));
     expect(parsed.steps).toEqual([]);

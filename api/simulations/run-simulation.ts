@@ -7,5 +7,5 @@ import type { SimulationInputs } from './simulations.schemas';
 /** Analyses the text and runs the kinetics engine: the whole job of one simulation thread. */
 export function runSimulation(text: string, inputs: SimulationInputs, hooks: SimulationHooks): SimulationResult {
   const analysis = analyseMechanism(text);
-  return simulate(buildSimulationInput(analysis, inputs), hooks);
+  return simulate(buildSimulationInput(analysis, inputs, text), hooks);
 }

@@ -1,13 +1,8 @@
 import type { MechanismAnalysis } from '../chemistry/analyse';
-import type { KineticModel, KineticStep } from '../chemistry/kinetics/model';
+import { kineticsFromAnalysis } from '../chemistry/kinetics/from-analysis';
 import type { SimulationInput } from '../chemistry/kinetics/simulation-types';
-import type { ConcentrationUnit } from '../chemistry/kinetics/units';
 import { AppError } from '../errors';
 import type { SimulationInputs } from './simulations.schemas';
-
-const UNITS: ConcentrationUnit[] = ['molecule cm^-3', 'mol L^-1', 'mol m^-2'];
-// Photons and third bodies are not integrated: J carries the light, [M] comes from the conditions.
-const NOT_INTEGRATED = new Set(['photon', 'third-body']);
 
 export class NotSimulableError extends AppError {
   constructor(message: string, details?: unknown) {
@@ -15,46 +10,24 @@ export class NotSimulableError extends AppError {
   }
 }
 
-function unitOf(analysis: MechanismAnalysis): ConcentrationUnit {
-  const unit = UNITS.find((u) => u === analysis.units.conc.trim());
-  if (!unit) throw new NotSimulableError(`Concentration unit "${analysis.units.conc}" cannot be simulated; use one of ${UNITS.join(', ')}`);
-  return unit;
-}
-
-function kineticStep(step: MechanismAnalysis['steps'][number], index: Map<string, number>): KineticStep {
-  const terms = (side: typeof step.reactants) =>
-    side.filter((term) => index.has(term.key)).map((term) => ({ index: index.get(term.key)!, coef: term.coef }));
-  return {
-    label: step.id,
-    reactants: terms(step.reactants),
-    products: terms(step.products),
-    thirdBody: step.reactants.some((term) => term.key === 'M'),
-    photolysis: step.photolysis,
-    forward: step.rate!.forward!,
-    reverse: step.reversible ? step.rate!.reverse : null,
-    forwardAt: { line: step.rate!.line, column: step.rate!.column },
-    stepClass: step.class,
-  };
-}
-
 /**
- * The kinetics engine's input from an analysed mechanism and the person's run settings: species that
- * are integrated, steps with their rate texts, routes, catalysts and intermediates.
+ * The kinetics engine's input from an analysed mechanism and the person's run settings; a mechanism
+ * that cannot be simulated (a step without a rate, an unsupported unit) is refused with where and why.
  */
-export function buildSimulationInput(analysis: MechanismAnalysis, inputs: SimulationInputs): SimulationInput {
-  const withoutRate = analysis.steps.filter((step) => !step.rate?.forward);
-  if (withoutRate.length > 0) {
-    throw new NotSimulableError(`Give a rate constant after @ for every step; missing at ${withoutRate.map((s) => `${s.id} (line ${s.line})`).join(', ')}`, {
-      steps: withoutRate.map((s) => ({ id: s.id, line: s.line })),
-    });
+export function buildSimulationInput(analysis: MechanismAnalysis, inputs: SimulationInputs, sourceText?: string): SimulationInput {
+  const setup = kineticsFromAnalysis(analysis, sourceText);
+  if (!setup.model) {
+    const errors = setup.diagnostics.filter((d) => d.severity === 'error');
+    const where = errors.map((d) => (d.label ? `${d.label} (line ${d.line})` : d.message)).join(', ');
+    throw new NotSimulableError(`This mechanism cannot be simulated yet: ${where}`, { diagnostics: errors });
   }
-  const species = analysis.species.filter((s) => !NOT_INTEGRATED.has(s.kind));
-  const index = new Map(species.map((s, i) => [s.key, i]));
-  const model: KineticModel = { species: species.map((s) => s.key), steps: analysis.steps.map((step) => kineticStep(step, index)), unit: unitOf(analysis) };
-  const fromText = analysis.conditions;
   return {
-    model,
-    conditions: { T: inputs.conditions.T ?? fromText.T ?? 298.15, P: inputs.conditions.P ?? fromText.P ?? 1, M: inputs.conditions.M ?? fromText.M ?? null },
+    model: setup.model,
+    conditions: {
+      T: inputs.conditions.T ?? setup.conditions.T,
+      P: inputs.conditions.P ?? setup.conditions.P,
+      M: inputs.conditions.M ?? setup.conditions.M,
+    },
     initial: inputs.initial,
     fixed: inputs.fixed,
     tEnd: inputs.tEnd,
@@ -62,10 +35,10 @@ export function buildSimulationInput(analysis: MechanismAnalysis, inputs: Simula
     light: inputs.light,
     rtol: inputs.rtol,
     atol: inputs.atol,
-    routes: analysis.routes.map((route, i) => ({ name: `R${i + 1}`, multipliers: route.multipliers })),
-    composition: species.map((s) => (s.opaque ? null : s.elements)),
-    catalysts: analysis.species.filter((s) => s.role === 'catalyst').map((s) => ({ species: s.key })),
-    intermediates: analysis.intermediates.filter((key) => index.has(key)),
+    routes: setup.routes,
+    composition: setup.composition,
+    catalysts: setup.catalysts.map((species) => ({ species })),
+    intermediates: setup.intermediates.filter((key) => setup.model!.species.includes(key)),
     steadyState: inputs.steadyState,
   };
 }

@@ -27,7 +27,7 @@ function checkSimulable(text: string, inputs: SimulationInputs): void {
   if (analysis.steps.length === 0) throw new ParseFailedError('The mechanism has no steps to simulate');
   if (analysis.steps.length > SIMULATION_LIMITS.maxSteps) throw new AppError(413, 'TOO_MANY_STEPS', `At most ${SIMULATION_LIMITS.maxSteps} steps can be simulated; this mechanism has ${analysis.steps.length}`);
   if (analysis.species.length > SIMULATION_LIMITS.maxSpecies) throw new AppError(413, 'TOO_MANY_SPECIES', `At most ${SIMULATION_LIMITS.maxSpecies} species can be simulated; this mechanism has ${analysis.species.length}`);
-  buildSimulationInput(analysis, inputs);
+  buildSimulationInput(analysis, inputs, text);
   const known = new Set(analysis.species.map((s) => s.key));
   const unknown = [...Object.keys(inputs.initial), ...inputs.fixed].filter((key) => !known.has(key));
   if (unknown.length > 0) {

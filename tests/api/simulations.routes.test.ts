@@ -77,6 +77,7 @@ describe('POST /api/simulations', () => {
     const noRate = await author.post('/api/simulations', { text: 'N1: NO + O3 -> NO2 + O2\n', inputs: { initial: { NO: 1 }, tEnd: 1 } });
     expect(noRate.status).toBe(422);
     expect(noRate.body.error.message).toMatch(/N1 \(line 1\)/);
+    expect(noRate.body.error.code).toBe('NOT_SIMULABLE');
     const unknown = await author.post('/api/simulations', { text: FIRST_ORDER, inputs: { initial: { XYZ: 1 }, tEnd: 1 } });
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.details.unknown).toEqual(['XYZ']);

@@ -12,3 +12,9 @@ if ! command -v pdftotext >/dev/null || ! command -v pdffonts >/dev/null; then
   apt-get update -qq
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends poppler-utils >/dev/null
 fi
+# Debian's pdfLaTeX with mhchem (texlive-science): the export tests compile the LaTeX exports.
+if ! command -v pdflatex >/dev/null || ! kpsewhich mhchem.sty >/dev/null 2>&1; then
+  echo "Installing Debian's texlive-latex-base and texlive-science…"
+  apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends texlive-latex-base texlive-science >/dev/null
+fi

@@ -59,6 +59,8 @@ describe('LaTeX export', () => {
   it('escapes LaTeX specials in titles, notes and rate expressions', () => {
     expect(texText('50% & "quoted", #1 a_b {c} ~ ^ \\')).toBe('50\\% \\& "quoted", \\#1 a\\_b \\{c\\} \\textasciitilde{} \\textasciicircum{} \\textbackslash{}');
     expect(tex).toContain('\\texttt{6.0e-34 * (T / 300)\\textasciicircum{}-2.4}');
+    expect(texText('Br• → BrO•, hν, ΔH ± 2')).toBe('Br\\textbullet{} \\ensuremath{\\rightarrow} BrO\\textbullet{}, h\\ensuremath{\\nu}, \\ensuremath{\\Delta}H \\ensuremath{\\pm} 2');
+    expect(texText('kJ mol⁻¹, O₃, cm²')).toBe('kJ mol\\textsuperscript{$-$1}, O\\textsubscript{3}, cm\\textsuperscript{2}');
     expect(tex).toMatch(/\\begin\{document\}[\s\S]*\\end\{document\}\n$/);
   });
 

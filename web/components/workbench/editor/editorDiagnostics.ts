@@ -13,7 +13,10 @@ function spanOf(diagnostic: Diagnostic, lineText: string): { from: number; to: n
   if (diagnostic.found && lineText.startsWith(diagnostic.found, start)) return { from: start, to: start + diagnostic.found.length };
   if (diagnostic.column <= 1) return { from: 0, to: lineText.length };
   const word = /^\S+/.exec(lineText.slice(start));
-  return { from: start, to: start + (word ? word[0].length : 0) };
+  if (word) return { from: start, to: start + word[0].length };
+  // At the end of the line ("the line ends too early"): underline the last thing written.
+  const before = /\S+\s*$/.exec(lineText.slice(0, start));
+  return before ? { from: before.index, to: start } : { from: start, to: start };
 }
 
 /**

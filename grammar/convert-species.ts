@@ -120,13 +120,16 @@ export function convertSpecies(raw: RawSpecies, context: LineContext): SpeciesNo
   const text = context.text.slice(start, end);
   reportBlank(text, start, context);
   const formulaText = context.text.slice(start, partEnd(parts[parts.length - 1], context));
+  const { radicalMarks, charge, sites } = readMarks(marks, context);
   return {
     kind: 'species',
     text,
     formulaText,
     formula: sharedFormula(formulaText, raw.formula, context, start),
     states: states.length === 0 ? NO_STATES : states.map((ref) => tokenOf(ref, context).text),
-    ...readMarks(marks, context),
+    radicalMarks,
+    charge,
+    sites,
     line: context.line,
     column: start + 1,
   };

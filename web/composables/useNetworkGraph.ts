@@ -49,6 +49,9 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
         instance.add(elementsOf(next));
       });
       await runLayout(instance);
+      // The tab may have changed size while the layout ran: fit to the box as it is now.
+      instance.resize();
+      instance.fit(undefined, 24);
       return;
     }
     instance.batch(() => {

@@ -5,6 +5,7 @@ import iodide from '../../../examples/iodide-peroxide.json';
 import { buildNetworkModel, type EdgeData, type SpeciesNodeData, type StepNodeData } from '@web/components/workbench/network/networkModel';
 import { WIDTH } from '@web/components/workbench/network/networkFlux';
 import { routeOptionLabel } from '@web/components/workbench/network/networkRoutes';
+import { networkSummary } from '@web/components/workbench/network/networkSummary';
 
 const analysis = saltLake as unknown as MechanismAnalysis;
 const speciesNodes = (model: ReturnType<typeof buildNetworkModel>) => model.nodes.filter((n): n is SpeciesNodeData => n.kind === 'species');
@@ -109,5 +110,18 @@ describe('edge widths from simulated fluxes', () => {
     // 1e6 of 1e9 is three of six decades down: half way.
     expect(b1).toBeCloseTo((WIDTH.fluxMin + WIDTH.fluxMax) / 2, 2);
     expect(edge(model, 'e:B2:out:O2').width).toBeLessThan(b1);
+  });
+});
+
+describe('networkSummary', () => {
+  it('says in words which route steps, cycle, catalysts and intermediates the picture shows', () => {
+    const model = buildNetworkModel(analysis, { route: 0, selectedStep: null });
+    expect(networkSummary(model)).toEqual([
+      'Route steps: B1 ×2, B2 ×1.',
+      'Cycle through: Br•, BrO•.',
+      'Catalysts (↻): Br•.',
+      'Intermediates (◌): BrO•, O(3P).',
+    ]);
+    expect(networkSummary(buildNetworkModel(analysis, { route: null, selectedStep: null }))[0]).toBe('Catalysts (↻): Br•.');
   });
 });

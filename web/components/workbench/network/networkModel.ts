@@ -15,6 +15,9 @@ export interface SpeciesNodeData {
   inCycle: boolean;
   /** A route is selected and this is not part of it. */
   dimmed: boolean;
+  /** Box size in px, from the label's lines (a sized box keeps the layout from overlapping labels). */
+  boxWidth: number;
+  boxHeight: number;
 }
 
 export interface StepNodeData {
@@ -60,6 +63,12 @@ export interface NetworkOptions {
 export const speciesNodeId = (key: string) => `s:${key}`;
 export const stepNodeId = (step: string) => `r:${step}`;
 
+/** Noto Sans at 12 px averages about 7 px a character (common practice: measure once, then estimate). */
+function boxOf(label: string): { boxWidth: number; boxHeight: number } {
+  const lines = label.split('\n');
+  return { boxWidth: Math.max(...lines.map((line) => line.length)) * 7 + 16, boxHeight: lines.length * 15 + 10 };
+}
+
 /** Catalysts carry a ring arrow and the word, intermediates a hollow ring: never colour alone. */
 export function speciesLabel(key: string, role: SpeciesRole): string {
   if (role === 'catalyst') return `↻ ${key}\ncatalyst`;
@@ -82,6 +91,7 @@ function speciesNodes(analysis: MechanismAnalysis, highlight: RouteHighlight): S
       kind: 'species' as const,
       key: s.key,
       label: speciesLabel(s.key, s.role),
+      ...boxOf(speciesLabel(s.key, s.role)),
       role: s.role,
       inRoute: highlight.species.has(s.key),
       inCycle: highlight.cycleSpecies.has(s.key),

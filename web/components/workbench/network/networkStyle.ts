@@ -13,8 +13,7 @@ export const networkStyle: StylesheetJson = [
     selector: 'node[kind = "species"]',
     style: {
       shape: 'round-rectangle', label: 'data(label)', 'font-family': FONT, 'font-size': 12, color: graphite[800],
-      'text-valign': 'center', 'text-halign': 'center', 'text-wrap': 'wrap', width: 'label', height: 'label',
-      padding: '7px', 'background-color': graphite[100], 'border-width': 1.5, 'border-color': graphite[500],
+      'text-valign': 'center', 'text-halign': 'center', 'text-wrap': 'wrap', width: 'data(boxWidth)', height: 'data(boxHeight)', 'background-color': graphite[100], 'border-width': 1.5, 'border-color': graphite[500],
       'min-zoomed-font-size': 7,
     },
   },

@@ -39,10 +39,10 @@ describe('TheAppHeader', () => {
   });
 
   it.each<[Role[], string[]]>([
-    [['author'], ['Library', 'Catalogue', 'Sets']],
+    [['author'], ['Library', 'Catalogue', 'Sets', 'Import']],
     [['reviewer'], ['Library', 'Catalogue', 'Sets', 'My reviews']],
     [['curator'], ['Library', 'Catalogue', 'Sets', 'To adopt']],
-    [['author', 'reviewer', 'curator'], ['Library', 'Catalogue', 'Sets', 'My reviews', 'To adopt']],
+    [['author', 'reviewer', 'curator'], ['Library', 'Catalogue', 'Sets', 'Import', 'My reviews', 'To adopt']],
     [['instructor', 'admin'], ['Library', 'Catalogue', 'Sets']],
   ])('for roles %j shows the navigation %j', async (roles, expected) => {
     const { wrapper } = await headerFor(roles);

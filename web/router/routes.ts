@@ -45,6 +45,7 @@ export const routes: RouteRecordRaw[] = [
   },
   { path: '/catalogue', name: 'catalogue', component: () => import('@web/views/CatalogueView.vue'), meta: { title: 'Species catalogue' } },
   { path: '/sets', name: 'sets', component: () => import('@web/views/SetsView.vue'), meta: { title: 'Sets' } },
+  { path: '/import', name: 'import', component: () => import('@web/views/ImportView.vue'), meta: { title: 'Import', roles: ['author'] } },
   { path: '/account', name: 'account', component: () => import('@web/views/AccountView.vue'), meta: { title: 'Account' } },
   {
     path: '/admin/roles',

@@ -57,7 +57,7 @@ describe('TheAppHeader', () => {
 
   it('adds the roles page to the menu for admins only', async () => {
     const { wrapper } = await headerFor(['admin']);
-    expect(await personMenuLabels(wrapper)).toEqual(['Account', 'Admin: roles', 'Sign out']);
+    expect(await personMenuLabels(wrapper)).toEqual(['Account', 'Admin: roles', 'Development inbox', 'Sign out']);
   });
 
   it('signs out through the API and lands on sign-in', async () => {

@@ -8,7 +8,7 @@ export interface SearchTerms {
   tag?: string;
 }
 
-const TOKEN = /(?:^|\s)(species|tag):(?:"([^"]*)"|(\S+))/gi;
+const TOKEN = /(?:^|\s)(species|tag):(?:"([^"]*)"|(\S*))/gi;
 
 /** The canonical species key: ASCII dots written as radical marks become `•` (step-notation.md). */
 export function canonicalSpecies(value: string): string {

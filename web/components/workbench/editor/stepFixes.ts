@@ -34,8 +34,10 @@ export function fixForDiagnostic(diagnostic: Diagnostic, lineText: string): Line
   }
   if (diagnostic.code === 'odd-electrons-unmarked' && diagnostic.found) {
     const from = diagnostic.column - 1;
-    if (lineText.slice(from, from + diagnostic.found.length) !== diagnostic.found) return null;
-    return { from, to: from + diagnostic.found.length, insert: replacement, name: `Write ${replacement}` };
+    const to = from + diagnostic.found.length;
+    // The whole species, not the start of a longer one (NO inside NO2).
+    if (lineText.slice(from, to) !== diagnostic.found || /\S/.test(lineText[to] ?? ' ')) return null;
+    return { from, to, insert: replacement, name: `Write ${replacement}` };
   }
   return null;
 }

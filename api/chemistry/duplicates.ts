@@ -3,13 +3,9 @@ import { finding } from './diagnostic-codes';
 import { normalisedText } from './equation-format';
 import type { StepModel } from './step-model';
 
-function shown(terms: StepModel['reactants']) {
-  return terms.map((term) => ({ key: term.species.key, coef: term.coef }));
-}
-
 /** The canonical equation of a step (see equation-format.ts). */
 export function normalisedStep(step: StepModel): string {
-  return normalisedText(shown(step.reactants), shown(step.products), step.reversible);
+  return normalisedText(step.reactants, step.products, step.reversible);
 }
 
 /** Reports a label used twice and a step written twice (a reversible step also matches its reverse). */
@@ -22,7 +18,7 @@ export function reportDuplicates(steps: readonly StepModel[], normalised: readon
       if (first) diagnostics.push(finding('duplicate-label', step.source.label, `label ${step.label} is already used on line ${first.source.line}`, { found: step.label }));
       else labels.set(step.label, step);
     }
-    const reverse = step.reversible ? normalisedText(shown(step.products), shown(step.reactants), true) : null;
+    const reverse = step.reversible ? normalisedText(step.products, step.reactants, true) : null;
     const first = equations.get(normalised[index]) ?? (reverse ? equations.get(reverse) : undefined);
     if (first) {
       const message = `step ${step.id} repeats step ${first.id} (line ${first.source.line})`;

@@ -25,9 +25,14 @@ export interface StepEnthalpy {
 
 /** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
-  const terms = step.terms.map((term, index) => ({ key: term.species.key, coef: (index < step.reactants.length ? -1 : 1) * term.coef.toNumber() }));
+  const terms: { key: string; coef: number }[] = [];
+  let photolysis = false;
+  for (const term of step.reactants) {
+    terms.push({ key: term.key, coef: -term.coef.toNumber() });
+    if (term.species.kind === 'photon') photolysis = true;
+  }
+  for (const term of step.products) terms.push({ key: term.key, coef: term.coef.toNumber() });
   const { dH, missing, used } = reactionEnthalpy(terms, lookup);
-  const photolysis = step.reactants.some((term) => term.species.kind === 'photon');
   return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
 }
 

@@ -18,6 +18,10 @@ export function lcm(a: bigint, b: bigint): bigint {
 export class Fraction {
   readonly num: bigint;
   readonly den: bigint;
+  // A fraction never changes, and a mechanism shows the same few coefficients on every step:
+  // its number and text are computed once (private fields stay out of equality checks).
+  #number: number | undefined;
+  #text: string | undefined;
 
   constructor(num: bigint, den: bigint = 1n) {
     if (den === 0n) throw new RangeError('Fraction: zero denominator');
@@ -84,11 +88,13 @@ export class Fraction {
   }
 
   toNumber(): number {
-    return Number(this.num) / Number(this.den);
+    if (this.#number === undefined) this.#number = Number(this.num) / Number(this.den);
+    return this.#number;
   }
 
   /** `3`, `-1/2`. */
   toString(): string {
-    return this.den === 1n ? this.num.toString() : `${this.num}/${this.den}`;
+    if (this.#text === undefined) this.#text = this.den === 1n ? this.num.toString() : `${this.num}/${this.den}`;
+    return this.#text;
   }
 }

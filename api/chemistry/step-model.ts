@@ -9,6 +9,8 @@ import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 export interface StepTerm {
   species: RegisteredSpecies;
   coef: Fraction;
+  /** The species key again, so that a term can be shown as it is (equation-format.ts). */
+  key: string;
 }
 
 /**
@@ -73,15 +75,23 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
   return readable ? read : null;
 }
 
-/** Lists the species of a readable side and merges equal terms (`A + A` is `2 A`). */
+/**
+ * Lists the species of a readable side and merges equal terms (`A + A` is `2 A`). A side has a
+ * handful of terms, so a scan is cheaper than a map per side.
+ */
 function mergeSide(terms: readonly ReadTerm[], registry: SpeciesRegistry): StepTerm[] {
-  const merged = new Map<string, StepTerm>();
+  const merged: StepTerm[] = [];
   for (const { species, coef, node } of terms) {
-    const known = merged.get(species.key);
+    const known = merged.find((term) => term.key === species.key);
     if (known) known.coef = known.coef.add(coef);
-    else merged.set(species.key, { species: registry.register(species, node.particle), coef });
+    else merged.push({ species: registry.register(species, node.particle), coef, key: species.key });
   }
-  return [...merged.values()];
+  return merged;
+}
+
+function findPhoton(terms: readonly TermNode[]) {
+  for (const term of terms) if (term.particle.kind === 'photon') return term.particle;
+  return undefined;
 }
 
 /** Builds the step model, or null (with diagnostics) when a species or coefficient cannot be read. */
@@ -92,7 +102,7 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   const reactants = mergeSide(left, registry);
   const products = mergeSide(right, registry);
   const label = node.label?.text ?? null;
-  const photon = node.products.find((term) => term.particle.kind === 'photon')?.particle;
+  const photon = findPhoton(node.products);
   const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;
   const source = { line: node.line, column: node.column, label: node.label, rate: node.rate, productPhoton };
   return { index: -1, id: label ?? `#${position}`, label, source, reversible: node.reversible, reactants, products, terms: [...reactants, ...products] };

@@ -3,7 +3,7 @@ import type { StepJson, TermJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
 import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
-import { equationText } from './equation-format';
+import { equationText, type ShownTerm } from './equation-format';
 import { balanceOf, type StepBalance } from './step-balance';
 import type { StepModel, StepTerm } from './step-model';
 import { checkStepRules, isElementary, molecularity, reportClass } from './step-rules';
@@ -12,11 +12,9 @@ import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
 function termsJson(terms: readonly StepTerm[]): TermJson[] {
-  return terms.map((term) => ({ key: term.species.key, coef: term.coef.toNumber(), coefText: term.coef.toString() }));
-}
-
-function shown(terms: readonly StepTerm[]) {
-  return terms.map((term) => ({ key: term.species.key, coef: term.coef }));
+  const json: TermJson[] = [];
+  for (const term of terms) json.push({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() });
+  return json;
 }
 
 function signed(value: number): string {
@@ -38,7 +36,7 @@ function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Dia
 
 function fixedEquation(step: StepModel, fix: BalancingFix): string {
   const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
-    const list = shown(terms).map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { ...term, coef: fix.to } : term));
+    const list: ShownTerm[] = terms.map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { ...term, coef: fix.to } : term));
     if (fix.kind === 'add' && fix.side === name) list.push({ key: fix.key, coef: fix.coef });
     return list;
   };
@@ -76,7 +74,7 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     id: step.id,
     line: source.line,
     column: source.column,
-    equation: equationText(shown(step.reactants), shown(step.products), step.reversible),
+    equation: equationText(step.reactants, step.products, step.reversible),
     normalised: normalisedStep(step),
     reversible: step.reversible,
     reactants: termsJson(step.reactants),

@@ -30,8 +30,10 @@ export const useReviewStore = defineStore('review', () => {
     try {
       rounds.value = await reviews.listRounds(nextSlug);
       const current = rounds.value.find((r) => ACTIVE.includes(r.state)) ?? rounds.value[0];
-      round.value = current ? await reviews.getRound(current.id) : null;
-      remarks.value = current ? await reviews.listRemarks(current.id) : [];
+      // Both together, so the round and its remarks never show different revisions.
+      const [detail, list] = current ? await Promise.all([reviews.getRound(current.id), reviews.listRemarks(current.id)]) : [null, []];
+      round.value = detail;
+      remarks.value = list;
     } catch (caught) {
       error.value = toError(caught);
     } finally {

@@ -24,5 +24,5 @@ describe('LaTeX export through pdfLaTeX with mhchem', () => {
     const log = compile(renderLatex(doc));
     expect(log).toContain('Output written on export.pdf');
     expect(log).not.toMatch(/Overfull \\hbox/);
-  });
+  }, 120_000);
 });

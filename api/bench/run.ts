@@ -8,6 +8,7 @@ const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   engine: () => import('./engine'),
   exports: () => import('./exports'),
   kinetics: () => import('./kinetics'),
+  network: () => import('./web-network'),
   repository: () => import('./repository'),
 };
 

@@ -2,7 +2,7 @@ import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
 import type { Core, ElementDefinition, EventObject } from 'cytoscape';
 import type { NetworkModel } from '@web/components/workbench/network/networkModel';
 import { loadCytoscape, rendererOptions, runLayout } from '@web/components/workbench/network/networkLayout';
-import { networkStyle } from '@web/components/workbench/network/networkStyle';
+import { networkStyleFor } from '@web/components/workbench/network/networkStyle';
 import { downloadBlob, graphToSvg } from '@web/components/workbench/network/networkSnapshot';
 
 function elementsOf(model: NetworkModel): ElementDefinition[] {
@@ -27,7 +27,7 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
   async function create(element: HTMLElement): Promise<void> {
     const cytoscape = await loadCytoscape();
     const nodeCount = model.value.nodes.length;
-    const instance = cytoscape({ container: element, style: networkStyle, elements: [], ...rendererOptions(nodeCount) });
+    const instance = cytoscape({ container: element, style: networkStyleFor(nodeCount), elements: [], ...rendererOptions(nodeCount) });
     instance.on('tap', 'node[kind = "step"]', (event: EventObject) => onStepClick(String(event.target.data('step'))));
     instance.on('mouseover', 'node', (event: EventObject) => {
       hovered.value = { label: String(event.target.data('key') ?? event.target.data('step')), role: event.target.data('role') ?? null };

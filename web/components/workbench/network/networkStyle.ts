@@ -1,5 +1,6 @@
 import type { StylesheetJson } from 'cytoscape';
 import { ember, graphite, ink, lagoon } from '@web/plugins/palette';
+import { LARGE_GRAPH_NODES } from './networkLayout';
 
 const FONT = '"Noto Sans", system-ui, sans-serif';
 
@@ -47,3 +48,20 @@ export const networkStyle: StylesheetJson = [
   { selector: 'edge[?inCycle]', style: { 'line-color': ink[700], 'target-arrow-color': ink[700] } },
   { selector: '[?dimmed]', style: { opacity: 0.3 } },
 ];
+
+/**
+ * The fast path of large graphs: haystack edges (straight, drawn in bulk) with the direction as a
+ * mid-edge arrow and no labels, and node labels only once zoomed in enough to read.
+ */
+const largeGraphStyle: StylesheetJson = [
+  {
+    selector: 'edge',
+    style: { 'curve-style': 'haystack', 'haystack-radius': 0, label: '', 'target-arrow-shape': 'none', 'mid-target-arrow-shape': 'triangle', 'mid-target-arrow-color': graphite[500] },
+  },
+  { selector: 'node', style: { 'min-zoomed-font-size': 10 } },
+];
+
+/** The stylesheet for a graph of `nodeCount` nodes. */
+export function networkStyleFor(nodeCount: number): StylesheetJson {
+  return nodeCount > LARGE_GRAPH_NODES ? [...networkStyle, ...largeGraphStyle] : networkStyle;
+}

@@ -10,6 +10,7 @@ const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   kinetics: () => import('./kinetics'),
   network: () => import('./web-network'),
   repository: () => import('./repository'),
+  web: () => import('./web'),
 };
 
 function format(row: BenchRow): string {

@@ -1,7 +1,8 @@
 import { onScopeDispose, watch, type Ref } from 'vue';
 import { clearDraft, readDraft, writeDraft, type StoredDraft } from './useDraftStorage';
 
-const WRITE_DELAY_MS = 400;
+// Long enough to stay out of the way of the analysis refresh: writing a large text blocks the page.
+const WRITE_DELAY_MS = 1000;
 
 /**
  * Keeps the editor's text in localStorage while it differs from the saved revision, and offers

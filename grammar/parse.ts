@@ -1,6 +1,6 @@
 import type { Token } from 'moo';
 import nearley from 'nearley';
-import type { ParsedMechanism } from './ast';
+import type { ParsedMechanism, StepNode } from './ast';
 import { convertDirective, convertStep } from './convert-line';
 import type { LineContext } from './convert-species';
 import { diagnostic, PARSER_CODES } from './diagnostics';
@@ -21,12 +21,16 @@ const DIRECTIVE_NAME = /^\s*%([A-Za-z_]*)/;
 
 const compiled = nearley.Grammar.fromCompiled(grammar);
 
+/** Receives each step as soon as its line is parsed (instead of the step list). */
+export type StepSink = (step: StepNode) => void;
+
 /**
  * Parses a mechanism text line by line with one compiled grammar. Never throws: every faulty
  * line becomes a diagnostic (line, column, code, what was found and expected) and the
- * well-formed lines are still returned.
+ * well-formed lines are still returned. With `onStep`, steps go to it as they are read and
+ * `steps` stays empty, so that a large text never holds every step's tree at once.
  */
-export function parseMechanism(text: string): ParsedMechanism {
+export function parseMechanism(text: string, onStep?: StepSink): ParsedMechanism {
   const parsed: ParsedMechanism = { steps: [], directives: [], diagnostics: [], lineCount: 0 };
   if (typeof text !== 'string') {
     parsed.diagnostics.push(diagnostic('error', PARSER_CODES.inputTooLarge, { line: 1, column: 1 }, 'the mechanism must be text'));
@@ -44,7 +48,7 @@ export function parseMechanism(text: string): ParsedMechanism {
   for (let index = 0; index < lines.length; index += 1) {
     const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas, budget };
     try {
-      parseLine(context, parsed);
+      parseLine(context, parsed, onStep);
     } catch (error) {
       const message = `this line could not be read (${error instanceof Error ? error.message : String(error)})`;
       parsed.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, { line: context.line, column: 1 }, message));
@@ -53,7 +57,7 @@ export function parseMechanism(text: string): ParsedMechanism {
   return parsed;
 }
 
-function parseLine(context: LineContext, parsed: ParsedMechanism): void {
+function parseLine(context: LineContext, parsed: ParsedMechanism, onStep: StepSink | undefined): void {
   const { text, line } = context;
   const tooLong = lineTooLong(text, line);
   if (tooLong) {
@@ -70,8 +74,9 @@ function parseLine(context: LineContext, parsed: ParsedMechanism): void {
   }
   const raw = runGrammar(context);
   if (!raw) return;
-  if (raw.kind === 'step') parsed.steps.push(convertStep(raw, context));
-  else parsed.directives.push(convertDirective(raw, context));
+  if (raw.kind !== 'step') parsed.directives.push(convertDirective(raw, context));
+  else if (onStep) onStep(convertStep(raw, context));
+  else parsed.steps.push(convertStep(raw, context));
 }
 
 function directiveIsKnown(context: LineContext): boolean {

@@ -1,5 +1,6 @@
 import { parseMechanism } from '@grammar/parse';
 import type { Diagnostic } from '@grammar/diagnostics';
+import type { StepNode } from '@grammar/ast';
 import type { MechanismAnalysis, SpeciesJson, SpeciesRole, StepJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
 import { reportDuplicates } from './duplicates';
@@ -27,30 +28,55 @@ export const MAX_ROUTE_ANALYSIS_STEPS = 600;
 /** Direct routes are listed for mechanisms of at most this many steps, unless told otherwise. */
 export const DEFAULT_MAX_ROUTE_STEPS = 40;
 
+// Any mention of this (even in a comment) sends the text down the path that reads declarations first.
+const DECLARATION_MARK = '%species';
+
 export interface AnalyseOptions {
   enthalpy?: EnthalpyLookup;
   maxRouteSteps?: number;
 }
 
-function buildSteps(nodes: ReturnType<typeof parseMechanism>['steps'], registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepModel[] {
+/** Builds each step node as it comes; positions count every well-formed step line, built or not. */
+function stepBuilder(registry: SpeciesRegistry, diagnostics: Diagnostic[]) {
   const steps: StepModel[] = [];
-  nodes.forEach((node, position) => {
-    const step = buildStep(node, position + 1, registry, diagnostics);
+  let position = 0;
+  const add = (node: StepNode) => {
+    position += 1;
+    const step = buildStep(node, position, registry, diagnostics);
     if (!step) return;
     step.index = steps.length;
     steps.push(step);
-  });
-  return steps;
+  };
+  return { steps, add };
 }
 
 /** Parses and builds the steps; the parse tree is not kept (the steps keep what they need of it). */
 function readMechanism(text: string) {
+  if (typeof text === 'string' && !text.includes(DECLARATION_MARK)) return readUndeclared(text);
   const parsed = parseMechanism(text);
   const diagnostics = [...parsed.diagnostics];
   const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
   const registry = new SpeciesRegistry(settings.declarations, diagnostics);
-  const steps = buildSteps(parsed.steps, registry, diagnostics);
-  return { diagnostics, settings, registry, steps };
+  const builder = stepBuilder(registry, diagnostics);
+  parsed.steps.forEach(builder.add);
+  return { diagnostics, settings, registry, steps: builder.steps };
+}
+
+/**
+ * Without %species declarations every species resolves on its own, so each step is built as soon
+ * as its line is parsed: the trees of a large text then die young instead of all being held
+ * (and copied by the collector) until the last line. The diagnostics keep the order of
+ * `readMechanism`: parser, directives, then steps.
+ */
+function readUndeclared(text: string) {
+  const stepDiagnostics: Diagnostic[] = [];
+  const registry = new SpeciesRegistry(new Map(), stepDiagnostics);
+  const builder = stepBuilder(registry, stepDiagnostics);
+  const parsed = parseMechanism(text, builder.add);
+  const diagnostics = [...parsed.diagnostics];
+  const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
+  for (const item of stepDiagnostics) diagnostics.push(item);
+  return { diagnostics, settings, registry, steps: builder.steps };
 }
 
 function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: EnthalpyLookup): SpeciesJson {

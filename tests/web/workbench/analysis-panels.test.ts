@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { mount, type DOMWrapper } from '@vue/test-utils';
 import type { Component } from 'vue';
 import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
@@ -8,6 +8,9 @@ import { installPrimeVue } from '@web/plugins/primevue';
 import WorkbenchRoutesPanel from '@web/components/workbench/WorkbenchRoutesPanel.vue';
 import WorkbenchSpeciesPanel from '@web/components/workbench/WorkbenchSpeciesPanel.vue';
 import WorkbenchStepsPanel from '@web/components/workbench/WorkbenchStepsPanel.vue';
+
+// The first mount compiles PrimeVue's DataTable, slow on a busy shared machine.
+vi.setConfig({ testTimeout: 30_000 });
 
 /** The engine's golden analysis of an example, exactly as POST /api/analyse returns it. */
 function golden(name: string): MechanismAnalysis {

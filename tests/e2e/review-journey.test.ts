@@ -52,12 +52,13 @@ async function openSection(page: Page, section: 'review' | 'remarks' | 'history'
   await page.locator(`[data-panel="${section}"]`).click();
 }
 
-async function giveVerdict(email: string, verdict: 'Endorse', shot: string) {
+async function giveVerdict(email: string, name: string, verdict: 'Endorse', shot: string) {
   const page = await signedInPage(email);
   await openSection(page, 'review');
   await page.locator('.review-verdict-form .p-togglebutton', { hasText: verdict }).click();
   await page.getByRole('button', { name: 'Give verdict' }).click();
-  await page.locator('.workbench-review-panel-summary li', { hasText: 'endorse' }).first().waitFor();
+  await page.locator('.workbench-review-panel-summary li', { hasText: name }).filter({ hasText: 'endorse' }).waitFor();
+  await page.locator('.review-verdict-form .p-button-loading').waitFor({ state: 'detached' });
   await screenshot(page, shot);
   await page.context().close();
 }
@@ -130,8 +131,8 @@ describe('the review journey in the browser', () => {
   });
 
   it('both reviewers endorse r2', async () => {
-    await giveVerdict(REVIEWERS[0], 'Endorse', 'review-6-first-endorsement');
-    await giveVerdict(REVIEWERS[1], 'Endorse', 'review-7-second-endorsement');
+    await giveVerdict(REVIEWERS[0], 'Kofi Glasswort', 'Endorse', 'review-6-first-endorsement');
+    await giveVerdict(REVIEWERS[1], 'Mei Tidewell', 'Endorse', 'review-7-second-endorsement');
   });
 
   it('curator adopts r2 from To adopt', async () => {
@@ -187,6 +188,16 @@ describe('the review journey in the browser', () => {
     const subjects = await page.locator('tbody tr td:nth-child(3)').allTextContents();
     expect(subjects.length).toBeGreaterThanOrEqual(4);
     await screenshot(page, 'review-11-inbox');
+    await page.setViewportSize({ width: 1920, height: 900 });
+    await screenshot(page, 'review-11-inbox-1920');
+    await page.goto(`${t.url}/account`);
+    await page.getByLabel('A verdict on your mechanism').uncheck();
+    await page.getByRole('button', { name: 'Save e-mail settings' }).click();
+    await page.getByText('E-mail settings saved.').waitFor();
+    await page.reload();
+    // The boxes show "on" until the saved settings arrive; the saved "off" must then show.
+    await expect.poll(() => page.getByLabel('A verdict on your mechanism').isChecked(), { timeout: 15_000 }).toBe(false);
+    await screenshot(page, 'review-13-account-mail-1920');
     await page.context().close();
   });
 });

@@ -36,14 +36,16 @@ describe('remarkGutter', () => {
     vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(['author']), csrfToken: 't' });
     const { wrapper, pinia } = await mountWithProps(EditorHost, {}, '/m/stratospheric-nox/compare');
     const review = useReviewStore(pinia);
-    review.$patch({ slug: 'stratospheric-nox', round: demoRound(), remarks: [demoRemark()] });
+    review.slug = 'stratospheric-nox';
+    review.round = demoRound();
+    review.remarks = [demoRemark()];
     await nextTick();
     await flushPromises();
     const markers = () => wrapper.findAll('.cm-remark-gutter .cm-remark-marker');
     expect(markers()).toHaveLength(1);
     expect(markers()[0].attributes('title')).toContain('Kofi Glasswort (open): Check the **rate**');
     const c2 = analysis.steps.find((step) => step.id === 'C2')!;
-    review.$patch({ remarks: [demoRemark(), demoRemark({ id: 40, stepLabel: 'C2', stepNormalised: c2.normalised, state: 'settled' })] });
+    review.remarks = [demoRemark(), demoRemark({ id: 40, stepLabel: 'C2', stepNormalised: c2.normalised, state: 'settled' })];
     await nextTick();
     expect(markers()).toHaveLength(2);
     expect(markers()[0].classes()).toContain('cm-remark-marker--settled');

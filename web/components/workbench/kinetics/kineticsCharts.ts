@@ -1,6 +1,7 @@
 import type { ChartConfiguration, ChartDataset } from 'chart.js';
 import type { SimulationResult } from '@api/simulations/simulations.schemas';
 import { ember, graphite, ink, lagoon } from '@web/plugins/palette';
+import { formatQuantity } from './kineticsFormat';
 
 /** Distinct line colours from our own scales, paired with dash patterns so colour is never the only cue. */
 const SERIES = [ink[600], ember[600], lagoon[600], graphite[700], ink[300], ember[800], lagoon[800], graphite[400]];
@@ -21,6 +22,13 @@ function point(x: number, y: number | null, axes: AxisOptions) {
   return { x, y };
 }
 
+/** Axis ticks as 1×10¹², not 1,000,000,000,000.00000; a log axis labels its decades only. */
+function tickLabel(value: number | string): string {
+  const number = Number(value);
+  if (number > 0 && Math.abs(Math.log10(number) % 1) > 1e-9 && (number >= 1e4 || number < 1e-2)) return '';
+  return formatQuantity(number, 2).replace(/^1\.0×/, '');
+}
+
 /** A line chart of `series` against the run's times. */
 export function timeChart(times: number[], series: { label: string; values: (number | null)[] }[], axes: AxisOptions, yTitle: string): ChartConfiguration<'line'> {
   const datasets: ChartDataset<'line', { x: number; y: number | null }[]>[] = series.map((s, i) => ({
@@ -34,8 +42,8 @@ export function timeChart(times: number[], series: { label: string; values: (num
       animation: false, responsive: true, maintainAspectRatio: false, parsing: false, normalized: true,
       interaction: { mode: 'nearest', axis: 'x', intersect: false },
       scales: {
-        x: { type: axes.logTime ? 'logarithmic' : 'linear', title: { display: true, text: 'time / s' } },
-        y: { type: axes.logValue ? 'logarithmic' : 'linear', title: { display: true, text: yTitle } },
+        x: { type: axes.logTime ? 'logarithmic' : 'linear', title: { display: true, text: 'time / s' }, ticks: { callback: tickLabel } },
+        y: { type: axes.logValue ? 'logarithmic' : 'linear', title: { display: true, text: yTitle }, ticks: { callback: tickLabel } },
       },
       plugins: { legend: { position: 'bottom', labels: { boxWidth: 24, boxHeight: 2 } } },
     },

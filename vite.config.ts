@@ -25,7 +25,13 @@ export default defineConfig({
       {
         plugins: [vue()],
         resolve: { alias },
-        test: { name: 'web', root: here('.'), environment: 'jsdom', include: ['tests/web/**/*.test.ts'] },
+        test: {
+          name: 'web',
+          root: here('.'),
+          environment: 'jsdom',
+          include: ['tests/web/**/*.test.ts'],
+          setupFiles: ['tests/web/jsdom-stand-ins.ts'],
+        },
       },
       {
         resolve: { alias },

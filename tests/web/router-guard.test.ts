@@ -60,7 +60,7 @@ describe('route guard', () => {
 
   it('shows the 404 page for unknown paths, signed in or not', async () => {
     expect((await landing(null, '/no/such/page')).name).toBe('not-found');
-    expect((await landing(['author'], '/m/unknown')).name).toBe('not-found');
+    expect((await landing(['author'], '/m/unknown/more/parts')).name).toBe('not-found');
   });
 
   it('treats an unreachable server as signed out', async () => {

@@ -81,6 +81,16 @@ describe('WorkbenchRemarksPanel', () => {
     expect(reviews.addRemark).toHaveBeenCalledWith(11, 'N1', 'Rate from the JPL evaluation?');
   });
 
+  it('lets the remark\'s writer settle it, and then lists it as settled', async () => {
+    vi.mocked(reviews.settleRemark).mockResolvedValue(undefined);
+    const wrapper = await mountPanel(['reviewer'], 2);
+    vi.mocked(reviews.listRemarks).mockResolvedValue([demoRemark({ state: 'settled' }), gone, settled]);
+    await threads(wrapper)[0].findAll('button').find((b) => b.text() === 'Settle')!.trigger('click');
+    await flushPromises();
+    expect(reviews.settleRemark).toHaveBeenCalledWith(21);
+    expect(wrapper.text()).toContain('settled (2)');
+  });
+
   it('offers no new-remark form to someone who is not assigned and no curator', async () => {
     const wrapper = await mountPanel(['reviewer'], 5);
     expect(wrapper.find('#remark-body').exists()).toBe(false);

@@ -44,6 +44,8 @@ export const SimulationInputs = z
   })
   .refine((v) => Object.keys(v.initial).length > 0, { message: 'Give at least one initial concentration', path: ['initial'] });
 export type SimulationInputs = z.infer<typeof SimulationInputs>;
+/** What a client may send: fields with defaults may be left out. */
+export type SimulationInputsBody = z.input<typeof SimulationInputs>;
 
 export const StartSimulationBody = z
   .object({

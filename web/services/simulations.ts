@@ -1,4 +1,4 @@
-import type { SimulationInputs, SimulationResult, SimulationStatus } from '@api/simulations/simulations.schemas';
+import type { SimulationInputs, SimulationInputsBody, SimulationResult, SimulationStatus } from '@api/simulations/simulations.schemas';
 import { http } from './http';
 
 export type { SimulationInputs, SimulationResult, SimulationStatus };
@@ -6,7 +6,7 @@ export type { SimulationInputs, SimulationResult, SimulationStatus };
 /** The body of `POST /api/simulations`: the editor's text (saved or not) and the run settings. */
 export interface StartSimulationRequest {
   text: string;
-  inputs: SimulationInputs;
+  inputs: SimulationInputsBody;
 }
 
 /** 202 `{ status: 'queued' }` for a new run, 200 with `cached: true` when the same run succeeded before. */

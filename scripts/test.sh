@@ -3,7 +3,7 @@
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/ensure-deps.sh || exit 1
-bash scripts/install-chromium.sh || exit 1
+bash scripts/install-test-tools.sh || exit 1
 CLUSTER=test DB_NAME=app_test bash scripts/pg-up.sh || exit 1
 
 mkdir -p test-output

@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# Debian's Chromium for the browser tests (playwright-core drives it; it never downloads a browser).
+# The test bootstrap's Debian packages: Chromium for the browser tests (playwright-core drives it; it never
+# downloads a browser), poppler-utils and pdfLaTeX for the export tests.
 set -euo pipefail
 if [ ! -x /usr/bin/chromium ]; then
   echo "Installing Debian's chromium…"

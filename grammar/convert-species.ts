@@ -11,6 +11,8 @@ export interface LineContext {
   diagnostics: Diagnostic[];
   /** Formulas already converted in this text, by formula text (shared, position-free). */
   formulas: Map<string, readonly FormulaPart[]>;
+  /** Species already converted without findings in this text, by the species text. */
+  shapes: Map<string, SpeciesShape>;
   /** Tokens the Earley parser may still read for this text (see limits.ts); −1 once spent. */
   budget: { tokens: number };
 }
@@ -110,8 +112,56 @@ function reportBlank(text: string, start: number, context: LineContext): void {
   context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, position, message, { found: text, expected: [text.replace(/\s+/g, '')] }));
 }
 
+/**
+ * A species node without its position. The same species text always converts to the same
+ * node apart from where it was written, and a mechanism repeats a few species over many steps.
+ */
+export interface SpeciesShape {
+  formulaText: string;
+  formula: readonly FormulaPart[];
+  states: readonly string[];
+  radicalMarks: number;
+  charge: { text: string; offset: number } | null;
+  sites: number;
+}
+
+function firstOf<T>(list: Cons<T>): T {
+  let cell = list;
+  while (cell.tail) cell = cell.tail;
+  return cell.head;
+}
+
+/** Where a species starts and ends, read from the last cells of its lists (no flattening). */
+function speciesSpan(raw: RawSpecies, context: LineContext): { start: number; end: number } {
+  const start = partStart(firstOf(raw.formula), context);
+  if (raw.marks) return { start, end: markEnd(raw.marks.head, context) };
+  if (raw.states) return { start, end: tokenEnd(raw.states.head, context) };
+  return { start, end: partEnd(raw.formula.head, context) };
+}
+
+function fromShape(shape: SpeciesShape, text: string, start: number, context: LineContext): SpeciesNode {
+  const { formulaText, formula, states, radicalMarks, charge, sites } = shape;
+  const chargeToken = charge ? { text: charge.text, line: context.line, column: start + 1 + charge.offset } : null;
+  return { kind: 'species', text, formulaText, formula, states, radicalMarks, charge: chargeToken, sites, line: context.line, column: start + 1 };
+}
+
 /** Turns a parsed species into its AST node; reports blanks inside it. */
 export function convertSpecies(raw: RawSpecies, context: LineContext): SpeciesNode {
+  const span = speciesSpan(raw, context);
+  const text = context.text.slice(span.start, span.end);
+  const shape = context.shapes.get(text);
+  if (shape) return fromShape(shape, text, span.start, context);
+  const findings = context.diagnostics.length;
+  const node = convertNewSpecies(raw, context);
+  if (context.diagnostics.length === findings) {
+    const { formulaText, formula, states, radicalMarks, sites } = node;
+    const charge = node.charge ? { text: node.charge.text, offset: node.charge.column - node.column } : null;
+    context.shapes.set(text, { formulaText, formula, states, radicalMarks, charge, sites });
+  }
+  return node;
+}
+
+function convertNewSpecies(raw: RawSpecies, context: LineContext): SpeciesNode {
   const parts = flatten(raw.formula);
   const states = flatten(raw.states);
   const marks = flatten(raw.marks);

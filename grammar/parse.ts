@@ -44,9 +44,10 @@ export function parseMechanism(text: string, onStep?: StepSink): ParsedMechanism
   const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
   parsed.lineCount = lines.length;
   const formulas = new Map();
+  const shapes = new Map();
   const budget = { tokens: PARSE_TOKEN_BUDGET };
   for (let index = 0; index < lines.length; index += 1) {
-    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas, budget };
+    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas, shapes, budget };
     try {
       parseLine(context, parsed, onStep);
     } catch (error) {

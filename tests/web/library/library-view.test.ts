@@ -5,8 +5,6 @@ import * as auth from '@web/services/auth';
 import * as mechanisms from '@web/services/mechanisms';
 import { ApiError } from '@web/services/http';
 import { demoUser, eventually, mountWithApp } from '../mount-app';
-// For its jsdom stand-ins (matchMedia, ResizeObserver) that PrimeVue's Select and DataTable need.
-import '../review/mount-with-props';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
 vi.mock('@web/services/mechanisms', () => ({ listMechanisms: vi.fn() }));

@@ -8,19 +8,6 @@ import { freshPinia } from '../mount-app';
 
 vi.setConfig({ testTimeout: 30_000 });
 
-// PrimeVue's Select listens to orientation changes; jsdom has no matchMedia.
-window.matchMedia ??= ((query: string) => ({
-  matches: false, media: query, onchange: null, addEventListener: () => {}, removeEventListener: () => {},
-  addListener: () => {}, removeListener: () => {}, dispatchEvent: () => false,
-})) as typeof window.matchMedia;
-
-// Textarea's auto-resize watches its size; jsdom lays nothing out.
-globalThis.ResizeObserver ??= class {
-  observe() {}
-  unobserve() {}
-  disconnect() {}
-} as unknown as typeof ResizeObserver;
-
 /** Mounts a component with props and the app's real plugins (router on memory history at `path`). */
 export async function mountWithProps(component: Component, props: Record<string, unknown>, path = '/account') {
   const pinia = freshPinia();

@@ -68,7 +68,7 @@ describe('the review journey in the browser', () => {
     const page = await signedInPage(AUTHOR);
     await openSection(page, 'review');
     await page.getByRole('button', { name: 'Open review round on r1' }).click();
-    await page.getByText('Round on r1').waitFor();
+    await page.getByText(/^Round on r1/).waitFor();
     await page.getByText('No reviewer assigned yet').waitFor();
     await screenshot(page, 'review-1-round-opened');
     await page.context().close();

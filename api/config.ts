@@ -26,7 +26,7 @@ export function configFromEnv(env: AppEnv): AppConfig {
       ...fake,
     },
     authRateLimit: { windowMs: 10 * 60 * 1000, limit: 30 },
-    webDir: env.SERVE_WEB === 'on' ? path.join(repoRoot, 'dist', 'web') : null,
+    webDir: env.SERVE_WEB === 'on' ? path.resolve(repoRoot, env.WEB_DIR ?? path.join('dist', 'web')) : null,
   };
 }
 

@@ -20,6 +20,8 @@ const Env = z.object({
   FAKE_SMTP: z.enum(['on', 'off']).optional(),
   ENDORSEMENTS_NEEDED: z.coerce.number().int().min(1).max(20).default(2),
   SERVE_WEB: z.enum(['on', 'off']).default('on'),
+  /** Another build of the client to serve (e.g. `vite build --outDir` elsewhere); dist/web by default. */
+  WEB_DIR: z.string().optional(),
   RUN_WORKER: z.enum(['on', 'off']).default('on'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });

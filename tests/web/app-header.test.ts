@@ -5,6 +5,7 @@ import * as auth from '@web/services/auth';
 import { ApiError } from '@web/services/http';
 import * as queues from '@web/services/queues';
 import type { Role } from '@web/services/types';
+import { useReviewActivityStore } from '@web/stores/reviewActivity';
 import { demoUser, eventually, mountWithApp } from './mount-app';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), signOut: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
@@ -86,6 +87,16 @@ describe('TheAppHeader', () => {
     await router.push('/my-reviews');
     await flushPromises();
     expect(vi.mocked(queues.fetchQueueCounts).mock.calls.length).toBe(asked + 1);
+  });
+
+  it('asks for queue counts again after a review act in this tab, and shows the new numbers', async () => {
+    const { wrapper, pinia } = await headerFor(['curator']);
+    vi.mocked(queues.fetchQueueCounts).mockResolvedValue({ myReviews: 0, toAdopt: 2 });
+    const asked = vi.mocked(queues.fetchQueueCounts).mock.calls.length;
+    useReviewActivityStore(pinia).record();
+    await flushPromises();
+    expect(vi.mocked(queues.fetchQueueCounts).mock.calls.length).toBe(asked + 1);
+    expect(wrapper.get('[data-queue="to-adopt"] .p-badge').text()).toBe('2');
   });
 
   it('does not ask for queue counts for people without a queue, and shows none on failure', async () => {

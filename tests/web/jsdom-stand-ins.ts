@@ -12,3 +12,14 @@ globalThis.ResizeObserver ??= class {
   unobserve() {}
   disconnect() {}
 } as unknown as typeof ResizeObserver;
+
+// The Remarks section scrolls an opened thread into view; jsdom lays nothing out to scroll.
+Element.prototype.scrollIntoView ??= function scrollIntoView() {};
+
+// CodeMirror measures text through ranges when the whole workbench is mounted; jsdom lays nothing out.
+Range.prototype.getClientRects ??= function getClientRects() {
+  return [] as unknown as DOMRectList;
+};
+Range.prototype.getBoundingClientRect ??= function getBoundingClientRect() {
+  return new DOMRect();
+};

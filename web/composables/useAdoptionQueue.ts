@@ -1,5 +1,6 @@
 import { reactive, ref } from 'vue';
 import { adoptRound, getRound, listToAdopt, type RoundDetail, type QueuedRound } from '@web/services/reviews';
+import { useReviewActivityStore } from '@web/stores/reviewActivity';
 import { useLoader } from './useLoader';
 
 /** The curator's "to adopt" queue: endorsed rounds, each round's endorsements, and adopting one. */
@@ -8,6 +9,7 @@ export function useAdoptionQueue() {
   const details = reactive<Record<number, RoundDetail>>({});
   const adoptingId = ref<number | null>(null);
   const adoptError = ref('');
+  const activity = useReviewActivityStore();
 
   async function load(): Promise<void> {
     await queue.load();
@@ -20,6 +22,7 @@ export function useAdoptionQueue() {
     adoptError.value = '';
     try {
       await adoptRound(round.id);
+      activity.record();
       await load();
     } catch (caught) {
       adoptError.value = `${round.title}, r${round.revision}: ${caught instanceof Error ? caught.message : String(caught)}`;

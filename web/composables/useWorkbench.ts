@@ -33,14 +33,20 @@ export function useWorkbench() {
     }
   }
 
-  /** After a save: the new revision is the one shown, and the summary and list are read again. */
-  async function takeSaved(saved: RevisionDetail): Promise<void> {
-    revision.value = saved;
+  /** Reads the summary and the list again: after a save, or after a review act changed the round or the reference. */
+  async function refreshSummary(): Promise<void> {
     if (!mechanism.value) return;
     const slug = mechanism.value.slug;
     const [summary, list] = await Promise.all([mechanisms.getMechanism(slug), mechanisms.listRevisions(slug)]);
+    if (mechanism.value?.slug !== slug) return;
     mechanism.value = summary;
     revisions.value = list;
+  }
+
+  /** After a save: the new revision is the one shown, and the summary and list are read again. */
+  async function takeSaved(saved: RevisionDetail): Promise<void> {
+    revision.value = saved;
+    await refreshSummary();
   }
 
   async function rename(title: string): Promise<void> {
@@ -55,5 +61,5 @@ export function useWorkbench() {
     error.value = null;
   }
 
-  return { mechanism, revisions, revision, loading, error, load, takeSaved, rename, reset };
+  return { mechanism, revisions, revision, loading, error, load, refreshSummary, takeSaved, rename, reset };
 }

@@ -2,6 +2,7 @@ import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import * as reviews from '@web/services/reviews';
 import type { Remark, RoundDetail, RoundListItem, Verdict } from '@web/services/reviews';
+import { useReviewActivityStore } from './reviewActivity';
 
 const ACTIVE = ['open', 'revise-requested', 'endorsed'];
 const toError = (caught: unknown) => (caught instanceof Error ? caught : new Error(String(caught)));
@@ -12,12 +13,16 @@ const toError = (caught: unknown) => (caught instanceof Error ? caught : new Err
  * panel and the editor's gutter show the same remarks and refresh together.
  */
 export const useReviewStore = defineStore('review', () => {
+  const activity = useReviewActivityStore();
   const slug = ref<string | null>(null);
   const rounds = ref<RoundListItem[]>([]);
   const round = ref<RoundDetail | null>(null);
   const remarks = ref<Remark[]>([]);
   const pending = ref(false);
   const error = ref<Error | null>(null);
+
+  /** A remark another part of the workbench asked to show; the Remarks section brings it into view, then clears it. */
+  const shownRemarkId = ref<number | null>(null);
 
   const isActive = computed(() => round.value !== null && ACTIVE.includes(round.value.state));
 
@@ -55,12 +60,14 @@ export const useReviewStore = defineStore('review', () => {
   async function act(action: (roundId: number) => Promise<RoundDetail>): Promise<void> {
     if (!round.value) throw new Error('There is no review round to act on');
     round.value = await action(round.value.id);
+    activity.record();
     await reload();
   }
 
   async function openRound(revision?: number): Promise<void> {
     if (!slug.value) return;
     await reviews.openRound(slug.value, revision);
+    activity.record();
     await reload();
   }
 
@@ -85,8 +92,12 @@ export const useReviewStore = defineStore('review', () => {
     if (round.value) remarks.value = await reviews.listRemarks(round.value.id);
   }
 
+  const showRemark = (remarkId: number | null) => {
+    shownRemarkId.value = remarkId;
+  };
+
   return {
-    slug, rounds, round, remarks, pending, error, isActive,
-    load, reload, openRound, assignReviewer, giveVerdict, withdraw, adopt, addRemark, reply, settle,
+    slug, rounds, round, remarks, pending, error, isActive, shownRemarkId,
+    load, showRemark, reload, openRound, assignReviewer, giveVerdict, withdraw, adopt, addRemark, reply, settle,
   };
 });

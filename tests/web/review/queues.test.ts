@@ -5,6 +5,7 @@ import ToAdoptView from '@web/views/ToAdoptView.vue';
 import * as auth from '@web/services/auth';
 import { ApiError } from '@web/services/http';
 import * as reviews from '@web/services/reviews';
+import { useReviewActivityStore } from '@web/stores/reviewActivity';
 import type { QueuedRound } from '@web/services/reviews';
 import { demoUser } from '../mount-app';
 import { demoRound } from './review-fixtures';
@@ -69,6 +70,8 @@ describe('ToAdoptView', () => {
     await flushPromises();
     expect(reviews.adoptRound).toHaveBeenCalledWith(11);
     expect(wrapper.text()).toContain('No endorsed revisions to adopt');
+    // The header's queue counts read the server again after this act.
+    expect(useReviewActivityStore().changes).toBe(1);
   });
 
   it('names the round when adopting fails', async () => {

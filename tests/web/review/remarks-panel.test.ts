@@ -1,22 +1,20 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
-import { analyseMechanism } from '@api/chemistry/analyse';
-import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
 import WorkbenchRemarksPanel from '@web/components/workbench/review/WorkbenchRemarksPanel.vue';
 import * as auth from '@web/services/auth';
 import * as reviews from '@web/services/reviews';
-import { readFileSync } from 'node:fs';
+import { useReviewStore } from '@web/stores/review';
 import { demoUser } from '../mount-app';
 import { mountWithProps } from './mount-with-props';
-import { demoMechanism, demoRemark, demoRound } from './review-fixtures';
+import { analysedAsJson, demoMechanism, demoRemark, demoRound, NOX_SOURCE } from './review-fixtures';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
 vi.mock('@web/services/reviews', () => ({
   listRounds: vi.fn(), getRound: vi.fn(), listRemarks: vi.fn(), addRemark: vi.fn(), settleRemark: vi.fn(), replyToRemark: vi.fn(), findPeople: vi.fn(),
 }));
 
-const source = readFileSync('examples/stratospheric-nox.steps', 'utf8');
-const analysis = JSON.parse(JSON.stringify(analyseMechanism(source), (_k, v) => (typeof v === 'bigint' ? Number(v) : v))) as MechanismAnalysis;
+const source = NOX_SOURCE;
+const analysis = analysedAsJson(source);
 
 const gone = demoRemark({
   id: 22, matching: false, stepLabel: 'X9', stepNormalised: 'Cl• + O3 -> ClO• + O2', originalLabel: 'X9', originalLine: 12,
@@ -95,5 +93,25 @@ describe('WorkbenchRemarksPanel', () => {
     const wrapper = await mountPanel(['reviewer'], 5);
     expect(wrapper.find('#remark-body').exists()).toBe(false);
     expect(threads(wrapper)).toHaveLength(2);
+  });
+
+  it('brings a remark opened elsewhere into view and focus, showing it even when the filter hid it', async () => {
+    const wrapper = await mountPanel(['reviewer'], 2);
+    expect(threads(wrapper)).toHaveLength(2);
+    const review = useReviewStore();
+    review.showRemark(23);
+    await flushPromises();
+    expect(threads(wrapper)).toHaveLength(3);
+    expect(wrapper.text()).toContain('Fine now');
+    expect(document.activeElement?.id).toBe('remark-thread-23');
+    expect(review.shownRemarkId).toBeNull();
+  });
+
+  it('keeps the open filter when the opened remark is open', async () => {
+    const wrapper = await mountPanel(['reviewer'], 2);
+    useReviewStore().showRemark(21);
+    await flushPromises();
+    expect(threads(wrapper)).toHaveLength(2);
+    expect(document.activeElement?.id).toBe('remark-thread-21');
   });
 });

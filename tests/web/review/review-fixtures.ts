@@ -1,5 +1,16 @@
+import { readFileSync } from 'node:fs';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
 import type { MechanismSummary } from '@web/services/mechanisms';
 import type { Remark, RoundDetail } from '@web/services/reviews';
+
+/** The reviewed example mechanism's text. */
+export const NOX_SOURCE = readFileSync('examples/stratospheric-nox.steps', 'utf8');
+
+/** The engine's analysis of a text as the API sends it: through JSON, big integers as numbers. */
+export function analysedAsJson(text: string): MechanismAnalysis {
+  return JSON.parse(JSON.stringify(analyseMechanism(text), (_k, v) => (typeof v === 'bigint' ? Number(v) : v))) as MechanismAnalysis;
+}
 
 /** Demo-scenario review data (invented people on example.test). */
 export function demoMechanism(overrides: Partial<MechanismSummary> = {}): MechanismSummary {

@@ -1,14 +1,8 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { analyseMechanism } from '@api/chemistry/analyse';
-import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
 import { describeTimeline, namesIn } from '@web/components/review/roundTimeline';
 import { placeRemarks } from '@web/composables/useStepRemarks';
-import { demoRemark, demoRound } from './review-fixtures';
+import { analysedAsJson as analyse, demoRemark, demoRound, NOX_SOURCE as source } from './review-fixtures';
 
-const analyse = (text: string) =>
-  JSON.parse(JSON.stringify(analyseMechanism(text), (_k, v) => (typeof v === 'bigint' ? Number(v) : v))) as MechanismAnalysis;
-const source = readFileSync('examples/stratospheric-nox.steps', 'utf8');
 
 describe('placeRemarks', () => {
   it('puts a labelled remark on its step and that step\'s line in the text on screen', () => {

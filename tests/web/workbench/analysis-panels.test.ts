@@ -8,6 +8,7 @@ import { installPrimeVue } from '@web/plugins/primevue';
 import WorkbenchRoutesPanel from '@web/components/workbench/WorkbenchRoutesPanel.vue';
 import WorkbenchSpeciesPanel from '@web/components/workbench/WorkbenchSpeciesPanel.vue';
 import WorkbenchStepsPanel from '@web/components/workbench/WorkbenchStepsPanel.vue';
+import { freshPinia } from '../mount-app';
 
 // The first mount compiles PrimeVue's DataTable, slow on a busy shared machine.
 vi.setConfig({ testTimeout: 30_000 });
@@ -20,7 +21,8 @@ function golden(name: string): MechanismAnalysis {
 function mountPanel(panel: Component, analysis: MechanismAnalysis | null, selectedStep: string | null = null) {
   return mount(panel, {
     props: { mechanism: null, revision: null, source: '', analysis, selectedStep },
-    global: { plugins: [{ install: installPrimeVue }] },
+    // Pinia for the review store: the Steps section shows the review round's remarks under their steps.
+    global: { plugins: [freshPinia(), { install: installPrimeVue }] },
   });
 }
 

@@ -17,10 +17,15 @@ export interface WorkbenchPanelProps {
   selectedStep: string | null;
 }
 
-/** What a panel may ask of the workbench: select a step everywhere, or replace the editor's text. */
+/**
+ * What a panel may ask of the workbench: select a step everywhere, replace the editor's text, or
+ * open a remark's thread in the Remarks section. (Review acts need no event: the review stores
+ * tell the header and the queues, stores/reviewActivity.ts.)
+ */
 export interface WorkbenchPanelEmits {
   'select-step': [stepId: string];
   'replace-source': [text: string];
+  'open-remark': [remarkId: number];
 }
 
 /** One entry of the panel registry (workbenchPanels.ts). */

@@ -1,10 +1,7 @@
-import { watch } from 'vue';
-import { useRoute } from 'vue-router';
-import { RangeSet, StateEffect, StateField, type Extension, type Text } from '@codemirror/state';
-import { EditorView, gutter, GutterMarker, ViewPlugin } from '@codemirror/view';
-import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
-import { useStepRemarks } from '@web/composables/useStepRemarks';
+import { RangeSet, type Extension, type Text } from '@codemirror/state';
+import { EditorView, gutter, GutterMarker } from '@codemirror/view';
 import type { Remark } from '@web/services/reviews';
+import { remarkField, remarkLinesIn, type RemarkLines } from './remarkLines';
 
 /** A speech-bubble marker beside a step line: how many remarks, and what they say on hover. */
 class RemarkMarker extends GutterMarker {
@@ -29,15 +26,8 @@ class RemarkMarker extends GutterMarker {
   }
 }
 
-const setRemarkLines = StateEffect.define<ReadonlyMap<number, Remark[]>>();
-
-function markersFor(lines: ReadonlyMap<number, Remark[]>, doc: Text): RangeSet<GutterMarker> {
-  const ranges = [...lines]
-    .filter(([line]) => line >= 1 && line <= doc.lines)
-    .sort(([a], [b]) => a - b)
-    .map(([line, remarks]) => new RemarkMarker(remarks).range(doc.line(line).from));
-  return RangeSet.of(ranges);
-}
+const markersFor = (lines: RemarkLines, doc: Text): RangeSet<GutterMarker> =>
+  RangeSet.of(remarkLinesIn(lines, doc).map(({ line, remarks }) => new RemarkMarker(remarks).range(line.from)));
 
 const remarkTheme = EditorView.baseTheme({
   '.cm-remark-gutter': { minWidth: '1.6em' },
@@ -45,23 +35,8 @@ const remarkTheme = EditorView.baseTheme({
   '.cm-remark-marker--settled': { opacity: '0.45' },
 });
 
-/**
- * Gutter markers for the remarks of the mechanism's review round in progress, on the lines of
- * their steps in the text being edited (found again by label, then normalised equation, whenever
- * the analysis is refreshed; moved with the text in between). Call while the editor component is
- * being set up or mounted: it reads the route's mechanism and the shared review store.
- */
-export function remarkGutter(analysis: () => MechanismAnalysis | null): Extension {
-  // Without a router (an editor mounted on its own) there is no mechanism, hence no remarks.
-  const route = useRoute() as ReturnType<typeof useRoute> | undefined;
-  const { byLine } = useStepRemarks(() => (typeof route?.params.slug === 'string' ? route.params.slug : null), analysis);
-  const markers = StateField.define<RangeSet<GutterMarker>>({
-    create: (state) => markersFor(byLine.value, state.doc),
-    update(value, transaction) {
-      const replaced = transaction.effects.find((effect) => effect.is(setRemarkLines));
-      return replaced ? markersFor(replaced.value as ReadonlyMap<number, Remark[]>, transaction.state.doc) : value.map(transaction.changes);
-    },
-  });
-  const follow = ViewPlugin.define((view) => ({ destroy: watch(byLine, (lines) => view.dispatch({ effects: setRemarkLines.of(lines) })) }));
-  return [markers, gutter({ class: 'cm-remark-gutter', markers: (view) => view.state.field(markers) }), follow, remarkTheme];
+/** Gutter markers on the lines of remarked steps (editorRemarks.ts keeps the lines current). */
+export function remarkGutter(lines: () => RemarkLines): Extension {
+  const markers = remarkField(lines, markersFor);
+  return [markers, gutter({ class: 'cm-remark-gutter', markers: (view) => view.state.field(markers) }), remarkTheme];
 }

@@ -15,6 +15,24 @@ function setup() {
   return { scope, source, live };
 }
 
+/** A server that answers each analysis after `ms`, noting what it was asked and the abort signals. */
+function slowServer(ms: number) {
+  const answers: string[] = [];
+  const signals: AbortSignal[] = [];
+  vi.mocked(analysisService.analyseText).mockImplementation((text, signal) => {
+    answers.push(text);
+    signals.push(signal!);
+    return new Promise((resolve, reject) => {
+      const timer = setTimeout(() => resolve(analysisOf(text)), ms);
+      signal!.addEventListener('abort', () => {
+        clearTimeout(timer);
+        reject(new DOMException('aborted', 'AbortError'));
+      });
+    });
+  });
+  return { answers, signals };
+}
+
 async function type(source: { value: string }, text: string) {
   source.value = text;
   await nextTick();
@@ -46,21 +64,51 @@ describe('useLiveAnalysis', () => {
     scope.stop();
   });
 
-  it('aborts an analysis still in flight when the text changes again, and keeps only the newest answer', async () => {
-    const signals: AbortSignal[] = [];
-    vi.mocked(analysisService.analyseText).mockImplementation((text, signal) => {
-      signals.push(signal!);
-      return new Promise((resolve) => setTimeout(() => resolve(analysisOf(text)), 1000));
-    });
+  it('never has two analyses in flight: text typed meanwhile waits, and only the newest is sent', async () => {
+    const { answers, signals } = slowServer(1000);
     const { source, live, scope } = setup();
     await type(source, 'first');
     await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
     await type(source, 'second');
     await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
-    expect(signals[0].aborted).toBe(true);
+    await type(source, 'third');
+    await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
+    expect(answers).toEqual(['first']);
+    expect(signals[0].aborted).toBe(false);
+    await vi.advanceTimersByTimeAsync(1000 - 2 * ANALYSE_DELAY_MS);
+    // The answer for "first" came, but the text has moved on: it is dropped and "third" is asked for.
+    expect(answers).toEqual(['first', 'third']);
+    expect(live.analysis.value).toBeNull();
+    expect(live.pending.value).toBe(true);
     await vi.advanceTimersByTimeAsync(1000);
-    expect(live.analysis.value?.title).toBe('second');
+    expect(live.analysis.value?.title).toBe('third');
+    expect(live.analysedSource.value).toBe('third');
+    expect(live.pending.value).toBe(false);
     scope.stop();
+  });
+
+  it('takes the answer in flight when the text goes back to what it was sent with', async () => {
+    const { answers } = slowServer(1000);
+    const { source, live, scope } = setup();
+    await type(source, 'B1: Br• + O3');
+    await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
+    await type(source, 'B1: Br• + O3 x');
+    await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
+    await type(source, 'B1: Br• + O3');
+    await vi.advanceTimersByTimeAsync(1000);
+    expect(answers).toEqual(['B1: Br• + O3']);
+    expect(live.analysedSource.value).toBe('B1: Br• + O3');
+    expect(live.pending.value).toBe(false);
+    scope.stop();
+  });
+
+  it('aborts the analysis in flight when it stops (the workbench closes)', async () => {
+    const { signals } = slowServer(1000);
+    const { source, scope } = setup();
+    await type(source, 'first');
+    await vi.advanceTimersByTimeAsync(ANALYSE_DELAY_MS);
+    scope.stop();
+    expect(signals[0].aborted).toBe(true);
   });
 
   it('does not ask again for a text whose analysis it already has (a saved revision)', async () => {

@@ -1,17 +1,9 @@
 import type { Knex } from 'knex';
+import type { AttachmentMeta } from './attachments.schemas';
+
+export type { AttachmentMeta };
 
 type Db = Knex | Knex.Transaction;
-
-export interface AttachmentMeta {
-  id: number;
-  mechanismId: number;
-  filename: string;
-  mediaType: string;
-  size: number;
-  sha256: string;
-  uploadedBy: number;
-  createdAt: Date;
-}
 
 const META = [
   'id', 'mechanism_id as mechanismId', 'filename', 'media_type as mediaType', 'size', 'sha256',

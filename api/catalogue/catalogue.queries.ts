@@ -1,21 +1,9 @@
 import type { Knex } from 'knex';
+import type { CatalogueRow } from './catalogue.schemas';
+
+export type { CatalogueRow };
 
 type Db = Knex | Knex.Transaction;
-
-export interface CatalogueRow {
-  id: number;
-  name: string;
-  formula: string;
-  lookupKey: string;
-  charge: number;
-  state: string | null;
-  smiles: string | null;
-  dfH: number | null;
-  dfHUncertainty: number | null;
-  dfHSource: string | null;
-  notes: string;
-  updatedAt: Date;
-}
 
 export type CatalogueValues = Omit<CatalogueRow, 'id' | 'updatedAt'>;
 

@@ -40,3 +40,40 @@ export const CatalogueSearchQuery = z.object({
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
 export type CatalogueSearchQuery = z.infer<typeof CatalogueSearchQuery>;
+
+/** One stored entry (`catalogue.queries.ts` reads it; the web gets it through `Jsonified`). */
+export interface CatalogueRow {
+  id: number;
+  name: string;
+  formula: string;
+  lookupKey: string;
+  charge: number;
+  state: string | null;
+  smiles: string | null;
+  dfH: number | null;
+  dfHUncertainty: number | null;
+  dfHSource: string | null;
+  notes: string;
+  updatedAt: Date;
+}
+
+/** What an entry's SMILES says: Hill formula, charge, formal charges per atom, unpaired electrons. */
+export interface CatalogueStructure {
+  formula: string;
+  charge: number;
+  formalCharges: { atom: number; symbol: string; charge: number }[];
+  unpairedElectrons: number;
+  oddElectrons: boolean;
+}
+
+/** `GET /api/catalogue/:id` and every entry the catalogue answers with. */
+export interface CatalogueEntry extends CatalogueRow {
+  structure: CatalogueStructure | null;
+}
+
+/** `GET /api/catalogue`. */
+export interface CataloguePage {
+  total: number;
+  page: number;
+  items: CatalogueEntry[];
+}

@@ -6,7 +6,7 @@ import { AppError, ConflictError, NotFoundError } from '../errors';
 import type { Viewer } from '../mechanisms/access';
 import * as catalogue from './catalogue.queries';
 import type { CatalogueRow, CatalogueValues } from './catalogue.queries';
-import type { CatalogueSearchQuery, CreateCatalogueEntryBody, UpdateCatalogueEntryBody } from './catalogue.schemas';
+import type { CatalogueEntry, CataloguePage, CatalogueSearchQuery, CreateCatalogueEntryBody, UpdateCatalogueEntryBody } from './catalogue.schemas';
 import { checkedStructure, structureSummary } from './structure-check';
 import { substructureFilter } from './substructure';
 import { readWrittenSpecies } from './written-species';
@@ -14,7 +14,7 @@ import { readWrittenSpecies } from './written-species';
 type EntryInput = CreateCatalogueEntryBody;
 
 /** An entry with what its structure says: formal charges and unpaired electrons. */
-export function presentEntry(row: CatalogueRow) {
+export function presentEntry(row: CatalogueRow): CatalogueEntry {
   return { ...row, structure: structureSummary(row.smiles) };
 }
 
@@ -34,7 +34,7 @@ async function assertKeyFree(db: Knex.Transaction, lookupKey: string, ownId: num
   }
 }
 
-export async function listEntries(db: Knex, query: CatalogueSearchQuery) {
+export async function listEntries(db: Knex, query: CatalogueSearchQuery): Promise<CataloguePage> {
   const rows = await catalogue.search(db, query.q);
   const contains = query.substructure ? substructureFilter(query.substructure) : null;
   const matching = contains ? rows.filter((row) => contains(row.smiles)) : rows;

@@ -1,5 +1,6 @@
 import { checkStructureMatches, parseSmiles, type StructureInfo } from '../chemistry/structure';
 import { AppError } from '../errors';
+import type { CatalogueStructure } from './catalogue.schemas';
 import type { WrittenSpecies } from './written-species';
 
 /**
@@ -24,7 +25,7 @@ export function checkedStructure(smiles: string, written: WrittenSpecies): Struc
 }
 
 /** What the structure says, for the entry's JSON (the depiction has its own address). */
-export function structureSummary(smiles: string | null) {
+export function structureSummary(smiles: string | null): CatalogueStructure | null {
   if (!smiles) return null;
   const { formula, charge, formalCharges, unpairedElectrons, oddElectrons } = parseSmiles(smiles);
   return { formula, charge, formalCharges, unpairedElectrons, oddElectrons };

@@ -1,15 +1,9 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import type { CapturedMail } from './inbox.schemas';
 
-export interface CapturedMail {
-  id: number;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  receivedAt: string;
-}
+export type { CapturedMail };
 
 export interface FakeSmtp {
   port: number;
@@ -36,7 +30,7 @@ export function startFakeSmtp(port = 0, host = '127.0.0.1'): Promise<FakeSmtp> {
             to: session.envelope.rcptTo.map((rcpt) => rcpt.address),
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
-            receivedAt: new Date().toISOString(),
+            receivedAt: new Date(),
           });
           callback();
         })

@@ -1,16 +1,9 @@
+import type { AttachmentMeta } from '@api/attachments/attachments.schemas';
 import { ApiError, csrfToken, errorFromResponse, http, NETWORK_ERROR, reportSessionProblem } from './http';
+import type { Jsonified } from './jsonified';
 
-/** A file kept with a mechanism (`GET /api/mechanisms/:slug/attachments`). */
-export interface Attachment {
-  id: number;
-  mechanismId: number;
-  filename: string;
-  mediaType: string;
-  size: number;
-  sha256: string;
-  uploadedBy: number;
-  createdAt: string;
-}
+/** A file kept with a mechanism (`GET /api/mechanisms/:slug/attachments`): the server's type with dates as strings. */
+export type Attachment = Jsonified<AttachmentMeta>;
 
 const attachmentsPath = (slug: string) => `/api/mechanisms/${encodeURIComponent(slug)}/attachments`;
 

@@ -1,34 +1,12 @@
-import type { CreateCatalogueEntryBody, UpdateCatalogueEntryBody } from '@api/catalogue/catalogue.schemas';
+import type {
+  CatalogueEntry as ServerCatalogueEntry, CataloguePage as ServerCataloguePage, CreateCatalogueEntryBody, UpdateCatalogueEntryBody,
+} from '@api/catalogue/catalogue.schemas';
 import { http, request } from './http';
+import type { Jsonified } from './jsonified';
 
-/** One catalogue entry as `GET /api/catalogue/:id` returns it (DEVELOPERS.md, "catalogue, sets, exports"). */
-export interface CatalogueEntry {
-  id: number;
-  name: string;
-  formula: string;
-  lookupKey: string;
-  charge: number;
-  state: string | null;
-  smiles: string | null;
-  dfH: number | null;
-  dfHUncertainty: number | null;
-  dfHSource: string | null;
-  notes: string;
-  updatedAt: string;
-  structure: {
-    formula: string;
-    charge: number;
-    formalCharges: { atom: number; symbol: string; charge: number }[];
-    unpairedElectrons: number;
-    oddElectrons: boolean;
-  } | null;
-}
-
-export interface CataloguePage {
-  total: number;
-  page: number;
-  items: CatalogueEntry[];
-}
+/** The catalogue's answers as JSON (DEVELOPERS.md, "catalogue, sets, exports"): the server's types with dates as strings. */
+export type CatalogueEntry = Jsonified<ServerCatalogueEntry>;
+export type CataloguePage = Jsonified<ServerCataloguePage>;
 
 export type CatalogueEntryInput = CreateCatalogueEntryBody;
 

@@ -31,5 +31,9 @@ export function diagnostic(
   message: string,
   extra: { found?: string; expected?: string[] } = {},
 ): Diagnostic {
-  return { severity, line: position.line, column: position.column, code, message, ...extra };
+  // Optional fields only when known, without a spread: large texts produce tens of thousands of these.
+  const built: Diagnostic = { severity, line: position.line, column: position.column, code, message };
+  if (extra.found !== undefined) built.found = extra.found;
+  if (extra.expected !== undefined) built.expected = extra.expected;
+  return built;
 }

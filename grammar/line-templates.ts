@@ -17,9 +17,11 @@ const MAX_TEMPLATES = 4_096;
 const templates = new Map<string, Template>();
 
 export function signatureOf(tokens: readonly Token[]): string {
-  let signature = '';
-  for (const token of tokens) signature += `${token.type} `;
-  return signature;
+  // Joined in one go: a string grown token by token is a chain of concatenations that the map
+  // lookup must first copy into one piece.
+  const types: (string | undefined)[] = new Array(tokens.length);
+  for (let index = 0; index < tokens.length; index += 1) types[index] = tokens[index].type;
+  return types.join(' ');
 }
 
 function toTemplate(node: unknown, indexOf: Map<unknown, number>): Template {

@@ -1,9 +1,9 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 
-/** Diagnostics in reading order (line, then column); equal places keep the order they were found in. */
+/**
+ * Diagnostics in reading order (line, then column); equal places keep the order they were found
+ * in, because `Array.prototype.sort` is stable (ES2019).
+ */
 export function sortDiagnostics(diagnostics: readonly Diagnostic[]): Diagnostic[] {
-  return diagnostics
-    .map((item, order) => ({ item, order }))
-    .sort((a, b) => a.item.line - b.item.line || a.item.column - b.item.column || a.order - b.order)
-    .map(({ item }) => item);
+  return diagnostics.slice().sort((a, b) => a.line - b.line || a.column - b.column);
 }

@@ -1,7 +1,7 @@
 import type { Fraction } from './fraction';
 import type { StepModel } from './step-model';
 import { roundNoise } from './thermo-lookup';
-import { reactionEnthalpy, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
+import { addToNet, netEnthalpy, reactionEnthalpy, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
 
 /** A lookup that asks the underlying table once per key. */
 export function cachedLookup(lookup: EnthalpyLookup): EnthalpyLookup {
@@ -25,16 +25,21 @@ export interface StepEnthalpy {
 
 /** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
-  const terms: { key: string; coef: number }[] = [];
+  const net = stepNet;
+  net.clear();
   let photolysis = false;
   for (const term of step.reactants) {
-    terms.push({ key: term.key, coef: -term.coef.toNumber() });
+    addToNet(net, term.key, -term.coef.toNumber());
     if (term.species.kind === 'photon') photolysis = true;
   }
-  for (const term of step.products) terms.push({ key: term.key, coef: term.coef.toNumber() });
-  const { dH, missing, used } = reactionEnthalpy(terms, lookup);
+  for (const term of step.products) addToNet(net, term.key, term.coef.toNumber());
+  const { dH, missing, used } = netEnthalpy(net, lookup);
   return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
 }
+
+// One scratch net reaction for every step (a step is computed synchronously, and a Map per step
+// was garbage the collector had to sweep on large mechanisms).
+const stepNet = new Map<string, number>();
 
 export interface RouteEnthalpy {
   /** Σ σ ΔH(step) when every step's ΔH is known, else ΔH of the net reaction. */

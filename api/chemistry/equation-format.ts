@@ -1,3 +1,4 @@
+import { flatText } from './flat-text';
 import { Fraction } from './fraction';
 
 const ONE = Fraction.ONE;
@@ -19,7 +20,7 @@ export function sideText(terms: readonly ShownTerm[]): string {
 
 /** The display form of a step or net reaction: `Br• + O3 → BrO• + O2`, `⇌` when reversible. */
 export function equationText(reactants: readonly ShownTerm[], products: readonly ShownTerm[], reversible = false): string {
-  return `${sideText(reactants)} ${reversible ? '⇌' : '→'} ${sideText(products)}`;
+  return flatText(sideText(reactants), reversible ? ' ⇌ ' : ' → ', sideText(products));
 }
 
 function sortedSide(terms: readonly ShownTerm[]): string {
@@ -34,5 +35,5 @@ function sortedSide(terms: readonly ShownTerm[]): string {
  * side, every coefficient explicit, ASCII arrows (`1 Br• + 1 O3 -> 1 BrO• + 1 O2`).
  */
 export function normalisedText(reactants: readonly ShownTerm[], products: readonly ShownTerm[], reversible: boolean): string {
-  return `${sortedSide(reactants)} ${reversible ? '<=>' : '->'} ${sortedSide(products)}`;
+  return flatText(sortedSide(reactants), reversible ? ' <=> ' : ' -> ', sortedSide(products));
 }

@@ -5,17 +5,27 @@ import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
 import { equationText, type ShownTerm } from './equation-format';
 import { balanceOf, type StepBalance } from './step-balance';
+import type { Fraction } from './fraction';
 import type { StepModel, StepTerm } from './step-model';
 import { checkStepRules, isElementary, molecularity, reportClass } from './step-rules';
 import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
-function termsJson(terms: readonly StepTerm[]): TermJson[] {
-  const json: TermJson[] = [];
-  for (const term of terms) json.push({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() });
+// The same species with the same coefficient recurs on many steps: one frozen term object each
+// (per species record, so the table goes with the analysis) keeps a large result small.
+const sharedTerms = new WeakMap<object, Map<Fraction, TermJson>>();
+
+function termJson(term: StepTerm): TermJson {
+  let byCoef = sharedTerms.get(term.species);
+  if (!byCoef) sharedTerms.set(term.species, (byCoef = new Map()));
+  let json = byCoef.get(term.coef);
+  if (!json) byCoef.set(term.coef, (json = Object.freeze({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() })));
   return json;
 }
+
+// `map` sizes the list exactly; a list grown by `push` keeps room for 16 terms on every step.
+const termsJson = (terms: readonly StepTerm[]): TermJson[] => terms.map(termJson);
 
 function signed(value: number): string {
   return value > 0 ? `+${value}` : String(value);
@@ -54,21 +64,24 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
 }
 
 function reportOpaque(step: StepModel, diagnostics: Diagnostic[]): void {
+  if (!step.terms.some((term) => term.species.opaque)) return;
   const opaque = step.terms.filter((term) => term.species.opaque).map((term) => term.species.key);
-  if (opaque.length === 0) return;
   diagnostics.push(finding('opaque-species', step.source, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }
 
 /** Checks one step and builds its JSON; diagnostics go to `diagnostics`. */
 export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: readonly SpeciesInfo[], diagnostics: Diagnostic[]): StepJson {
   const balance = balanceOf(step);
-  reportImbalance(step, balance, diagnostics);
-  if (!balance.balanced) reportFix(step, candidates, diagnostics);
+  if (!balance.balanced) {
+    reportImbalance(step, balance, diagnostics);
+    reportFix(step, candidates, diagnostics);
+  }
   reportOpaque(step, diagnostics);
   checkStepRules(step, diagnostics);
   const stepClass = reportClass(step, diagnostics);
   const enthalpy = stepEnthalpy(step, lookup);
   const source = step.source;
+  // Fields written out (no spread of `balance`): this literal is built once per step of a large text.
   return {
     label: step.label,
     id: step.id,
@@ -79,7 +92,11 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     reversible: step.reversible,
     reactants: termsJson(step.reactants),
     products: termsJson(step.products),
-    ...balance,
+    imbalance: balance.imbalance,
+    chargeDelta: balance.chargeDelta,
+    siteDelta: balance.siteDelta,
+    balanced: balance.balanced,
+    elementsChecked: balance.elementsChecked,
     class: stepClass,
     photolysis: step.reactants.some((term) => term.species.kind === 'photon'),
     molecularity: molecularity(step),

@@ -1,5 +1,6 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
+import { flatText } from './flat-text';
 import type { StepModel, StepTerm } from './step-model';
 
 /** The step's class from the change in radical count (analysis.md, "Steps"). */
@@ -54,18 +55,18 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   }
   const count = molecularity(step);
   if (count > 3) diagnostics.push(finding('molecularity-above-three', source, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
+  if (step.terms.every((term) => term.coef.isInteger())) return;
   const lumped = step.terms.filter((term) => !term.coef.isInteger());
-  if (lumped.length > 0) {
-    const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
-    diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
-  }
+  const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
+  diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
 }
 
 /** Reports steps that start, branch or end radical chains. */
 export function reportClass(step: StepModel, diagnostics: Diagnostic[]): StepClass {
   const { stepClass, before, after } = classify(step);
   if (stepClass === 'initiation' || stepClass === 'branching' || stepClass === 'termination') {
-    diagnostics.push(finding('step-class', step.source, `step ${step.id} is ${stepClass === 'initiation' ? 'an' : 'a'} ${stepClass} step: radicals ${before} → ${after}`));
+    const message = flatText('step ', step.id, stepClass === 'initiation' ? ' is an ' : ' is a ', stepClass, ' step: radicals ', before, ' → ', after);
+    diagnostics.push(finding('step-class', step.source, message));
   }
   return stepClass;
 }

@@ -18,6 +18,9 @@ export type EnthalpyLookup = (speciesKey: string) => EnthalpyEntry | null;
 /** The built-in table (`thermo-data/`), with state-tag and radical-mark normalisation. */
 export const builtinEnthalpy: EnthalpyLookup = createEnthalpyLookup(THERMO_RECORDS);
 
+// Shared by every reaction with all its enthalpies known (frozen: it is never filled in).
+const NONE_MISSING = Object.freeze([]) as unknown as string[];
+
 // A photon and a third body take part in a step without an enthalpy of formation of their own.
 const NOT_SPECIES = new Set(['hν', 'hv', 'M']);
 
@@ -41,34 +44,39 @@ export function reactionEnthalpy(
   terms: { key: string; coef: number }[],
   lookup: EnthalpyLookup,
 ): ReactionEnthalpy {
-  const net = netCoefficients(terms);
-  const missing: string[] = [];
+  const net = new Map<string, number>();
+  for (const { key, coef } of terms) addToNet(net, key, coef);
+  return netEnthalpy(net, lookup);
+}
+
+/** Adds ν of one term to a net reaction (photons and third bodies left out). */
+export function addToNet(net: Map<string, number>, key: string, coef: number): void {
+  if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
+  if (NOT_SPECIES.has(key)) return;
+  net.set(key, (net.get(key) ?? 0) + coef);
+}
+
+/** ΔH = Σ ν ΔfH° of a net reaction built with `addToNet`; species whose ν is 0 are not looked up. */
+export function netEnthalpy(net: ReadonlyMap<string, number>, lookup: EnthalpyLookup): ReactionEnthalpy {
+  let missing: string[] | null = null;
   const used: EnthalpyEntry[] = [];
   let dH = 0;
   let variance: number | null = 0;
   for (const [key, coef] of net) {
+    if (Math.abs(coef) < 1e-12) continue;
     const entry = lookup(key);
     if (!entry) {
-      missing.push(key);
+      (missing ??= []).push(key);
       continue;
     }
     used.push(entry);
     dH += coef * entry.dfH;
     variance = entry.uncertainty === null || variance === null ? null : variance + (coef * entry.uncertainty) ** 2;
   }
-  if (missing.length > 0) return { dH: null, missing, used, uncertainty: null };
-  return { dH: roundNoise(dH), missing, used, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
-}
-
-function netCoefficients(terms: { key: string; coef: number }[]): Map<string, number> {
-  const net = new Map<string, number>();
-  for (const { key, coef } of terms) {
-    if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
-    if (NOT_SPECIES.has(key)) continue;
-    net.set(key, (net.get(key) ?? 0) + coef);
-  }
-  for (const [key, coef] of net) if (Math.abs(coef) < 1e-12) net.delete(key);
-  return net;
+  // Copies sized to their content: a list grown by `push` keeps room for 16 entries, on every step of a large text.
+  const usedList = used.slice();
+  if (missing) return { dH: null, missing: missing.slice(), used: usedList, uncertainty: null };
+  return { dH: roundNoise(dH), missing: NONE_MISSING, used: usedList, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
 }
 
 /**

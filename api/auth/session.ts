@@ -1,6 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import pg from 'pg';
+import { throttleTouch } from './session-touch';
 
 export interface SessionOptions {
   databaseUrl: string;
@@ -16,6 +17,7 @@ export function createSessionMiddleware(options: SessionOptions) {
     // An idle client lost its server (PostgreSQL restarting): the pool replaces it on next use.
   });
   const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: false });
+  throttleTouch(store);
   const middleware = session({
     name: 'cyclewright.sid',
     secret: options.secret,

@@ -3,7 +3,7 @@ import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium } from 'playwright-core';
+import { chromium, type Page } from 'playwright-core';
 import { build } from 'vite';
 import { generateMechanism } from '../../examples/generate-large';
 import { analyseMechanism } from '../chemistry/analyse';
@@ -14,29 +14,57 @@ const GROUP = 'network';
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 const REPEATS = 3;
 
-/** The page runs the panel's own code: loadCytoscape, the style, the renderer options and the layout. */
+/**
+ * The page runs the panel's own code, in the panel's order: the layout planned (a worker for large
+ * graphs) while cytoscape loads, then drawNetwork (elements in place, fitted). The baseline adds the
+ * same elements with the same style and lays them out with cytoscape's grid. A tap handler on step
+ * nodes, as the panel's, records when a click is handled.
+ */
 const ENTRY = `
-import { loadCytoscape, rendererOptions, runLayout } from '@web/components/workbench/network/networkLayout';
-import { networkStyleFor } from '@web/components/workbench/network/networkStyle';
+import { createNetworkCore, drawNetwork, elementsOf } from '@web/components/workbench/network/networkGraph';
+import { planLayout } from '@web/components/workbench/network/networkLayout';
 
 const frame = () => new Promise((resolve) => requestAnimationFrame(() => resolve()));
 
-window.benchLayout = async (elements, mode) => {
+window.benchLayout = async (model, mode) => {
+  window.benchCy?.destroy();
   const container = document.getElementById('graph');
   const started = performance.now();
-  const cytoscape = await loadCytoscape();
-  const nodeCount = elements.filter((e) => e.group === 'nodes').length;
-  const cy = cytoscape({ container, style: networkStyleFor(nodeCount), elements, ...rendererOptions(nodeCount) });
-  const built = performance.now() - started;
-  if (mode === 'grid') await new Promise((resolve) => { const l = cy.layout({ name: 'grid', fit: true }); l.one('layoutstop', resolve); l.run(); });
-  else await runLayout(cy);
+  window.benchStarted = started;
+  window.benchTapped = null;
+  const planned = mode === 'grid' ? null : planLayout(model);
+  let positioned = null;
+  planned?.then(() => (positioned = performance.now() - started));
+  const cy = await createNetworkCore(container, model.nodes.length);
+  cy.on('tap', 'node[kind = "step"]', (event) => (window.benchTapped = { step: event.target.data('step'), at: performance.now() - started }));
+  if (mode === 'grid') {
+    cy.add(elementsOf(model));
+    await new Promise((resolve) => { const l = cy.layout({ name: 'grid', fit: true }); l.one('layoutstop', resolve); l.run(); });
+    cy.fit(undefined, 24);
+  } else {
+    await drawNetwork(cy, model, planned);
+  }
   const laidOut = performance.now() - started;
-  cy.fit(undefined, 24);
   await frame();
   await frame();
   const interactive = performance.now() - started;
-  cy.destroy();
-  return { built, laidOut, interactive };
+  window.benchCy = cy;
+  return { positioned: positioned ?? laidOut, laidOut, interactive };
+};
+
+const overlap = (a, b) => a.x1 < b.x2 && b.x1 < a.x2 && a.y1 < b.y2 && b.y1 < a.y2;
+
+/** Where on the page a step node is drawn that no other node covers, to click it. */
+window.benchStepPoint = () => {
+  const cy = window.benchCy;
+  const box = cy.container().getBoundingClientRect();
+  const nodes = cy.nodes();
+  const node = cy.nodes('[kind = "step"]').filter((n, i) => i % 7 === 0).find((n) => {
+    const own = n.boundingBox({ includeLabels: false });
+    return nodes.every((other) => other === n || !overlap(own, other.boundingBox({ includeLabels: false })));
+  });
+  const p = node.renderedPosition();
+  return { step: node.data('step'), x: box.left + p.x, y: box.top + p.y };
 };
 `;
 
@@ -78,10 +106,28 @@ function graphOf(minNodes: number) {
 }
 
 interface Timing {
-  built: number;
+  positioned: number;
   laidOut: number;
   interactive: number;
-  cpu?: number;
+  /** From the start to the panel's tap handler running for a click sent once the graph was drawn. */
+  tapped: number;
+  cpu: number;
+}
+
+interface BenchWindow {
+  benchLayout: (model: unknown, mode: string) => Promise<Omit<Timing, 'tapped' | 'cpu'>>;
+  benchStepPoint: () => { step: string; x: number; y: number };
+  benchTapped: { step: string; at: number } | null;
+}
+
+/** Clicks a step node where it is drawn and returns when the panel's tap handler saw it; throws if it never does. */
+async function clickAStep(page: Page): Promise<number> {
+  const point = await page.evaluate(() => (window as unknown as BenchWindow).benchStepPoint());
+  await page.mouse.click(point.x, point.y);
+  const tapped = await page.waitForFunction(() => (window as unknown as BenchWindow).benchTapped, undefined, { timeout: 10_000 });
+  const { step, at } = (await tapped.jsonValue())!;
+  if (step !== point.step) throw new Error(`clicked step ${point.step} but the graph reported ${step}`);
+  return at;
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
@@ -95,31 +141,36 @@ const webNetworkBench: BenchSuite = async () => {
     await page.goto(url);
     await page.waitForFunction(() => 'benchLayout' in window);
     const { steps, model } = graphOf(2000);
-    const elements = [...model.nodes.map((data) => ({ group: 'nodes', data })), ...model.edges.map((data) => ({ group: 'edges', data }))];
     // The machine may be shared: the renderer main thread's CPU time is reported beside wall time.
     const cdp = await page.context().newCDPSession(page);
     await cdp.send('Performance.enable');
     const threadTime = async () => (await cdp.send('Performance.getMetrics')).metrics.find((m) => m.name === 'ThreadTime')!.value * 1000;
-    const run = async (mode: 'fcose' | 'grid'): Promise<Timing> => {
+    const run = async (mode: 'panel' | 'grid'): Promise<Timing> => {
       const cpuBefore = await threadTime();
-      const timing = await page.evaluate(([els, m]) => (window as unknown as { benchLayout: (e: unknown, m: string) => Promise<Timing> }).benchLayout(els, m), [elements, mode] as const);
-      return { ...timing, cpu: (await threadTime()) - cpuBefore };
+      const timing = await page.evaluate(([m, mo]) => (window as unknown as BenchWindow).benchLayout(m, mo), [model, mode] as const);
+      const cpu = (await threadTime()) - cpuBefore;
+      return { ...timing, cpu, tapped: await clickAStep(page) };
     };
-    const cold = await run('fcose');
+    const cold = await run('panel');
     const warm: Timing[] = [];
     const grid: Timing[] = [];
     for (let k = 0; k < REPEATS; k++) {
-      warm.push(await run('fcose'));
+      warm.push(await run('panel'));
       grid.push(await run('grid'));
     }
     const label = `${model.nodes.length} nodes / ${model.edges.length} edges (${steps} steps)`;
     const baseline = (value: number) => ({ name: 'built-in grid layout', value, unit: 'ms' });
+    const figure = (name: string, pick: (t: Timing) => number, target?: string): BenchRow => ({
+      group: GROUP, name, value: median(warm.map(pick)), unit: 'ms', baseline: baseline(median(grid.map(pick))), ...(target ? { target } : {}),
+    });
     const rows: BenchRow[] = [
-      { group: GROUP, name: `elements and styles built, ${label}`, value: median(warm.map((r) => r.built)), unit: 'ms', baseline: baseline(median(grid.map((r) => r.built))) },
-      { group: GROUP, name: 'fCoSE laid out', value: median(warm.map((r) => r.laidOut)), unit: 'ms', baseline: baseline(median(grid.map((r) => r.laidOut))) },
-      { group: GROUP, name: 'fCoSE laid out and drawn (interactive)', value: median(warm.map((r) => r.interactive)), unit: 'ms', baseline: baseline(median(grid.map((r) => r.interactive))), target: '< 2000 ms' },
-      { group: GROUP, name: 'fCoSE to interactive: main-thread CPU time', value: median(warm.map((r) => r.cpu!)), unit: 'ms', baseline: { ...baseline(median(grid.map((r) => r.cpu!))), name: 'grid layout, CPU' }, target: '< 2000 ms' },
+      { group: GROUP, name: `positions from the worker, ${label}`, value: median(warm.map((r) => r.positioned)), unit: 'ms' },
+      figure('elements added in place and fitted', (r) => r.laidOut),
+      figure('laid out and drawn (interactive)', (r) => r.interactive, '< 2000 ms'),
+      figure('a click on a step handled (from the start)', (r) => r.tapped, '< 2000 ms'),
+      { ...figure('to interactive: main-thread CPU time', (r) => r.cpu), baseline: { ...baseline(median(grid.map((r) => r.cpu))), name: 'grid layout, CPU' } },
       { group: GROUP, name: 'first open: fetch cytoscape + lay out + draw', value: cold.interactive, unit: 'ms', target: '< 2000 ms' },
+      { group: GROUP, name: 'runs (laid out and drawn), lowest–highest', value: Math.min(...warm.map((r) => r.interactive)), unit: 'ms', target: `highest ${Math.max(...warm.map((r) => r.interactive)).toFixed(0)} ms` },
     ];
     return rows;
   } finally {

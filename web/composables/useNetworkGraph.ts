@@ -1,16 +1,9 @@
 import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
-import type { Core, ElementDefinition, EventObject } from 'cytoscape';
+import type { Core, EventObject } from 'cytoscape';
 import type { NetworkModel } from '@web/components/workbench/network/networkModel';
-import { loadCytoscape, rendererOptions, runLayout } from '@web/components/workbench/network/networkLayout';
-import { networkStyleFor } from '@web/components/workbench/network/networkStyle';
+import { createNetworkCore, drawNetwork } from '@web/components/workbench/network/networkGraph';
+import { planLayout } from '@web/components/workbench/network/networkLayout';
 import { downloadBlob, graphToSvg } from '@web/components/workbench/network/networkSnapshot';
-
-function elementsOf(model: NetworkModel): ElementDefinition[] {
-  return [
-    ...model.nodes.map((data) => ({ group: 'nodes' as const, data: { ...data } })),
-    ...model.edges.map((data) => ({ group: 'edges' as const, data: { ...data } })),
-  ];
-}
 
 const structureOf = (model: NetworkModel) => `${model.nodes.map((n) => n.id).join('|')}#${model.edges.map((e) => e.id).join('|')}`;
 
@@ -25,33 +18,28 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
   let structure = '';
 
   async function create(element: HTMLElement): Promise<void> {
-    const cytoscape = await loadCytoscape();
-    const nodeCount = model.value.nodes.length;
-    const instance = cytoscape({ container: element, style: networkStyleFor(nodeCount), elements: [], ...rendererOptions(nodeCount) });
+    // A large graph's layout starts in its worker while cytoscape is fetched.
+    const planned = planLayout(model.value);
+    const instance = await createNetworkCore(element, model.value.nodes.length);
     instance.on('tap', 'node[kind = "step"]', (event: EventObject) => onStepClick(String(event.target.data('step'))));
     instance.on('mouseover', 'node', (event: EventObject) => {
       hovered.value = { label: String(event.target.data('key') ?? event.target.data('step')), role: event.target.data('role') ?? null };
     });
     instance.on('mouseout', 'node', () => (hovered.value = null));
     cy.value = instance;
-    await sync(model.value);
+    await sync(model.value, planned);
     status.value = 'ready';
   }
 
-  async function sync(next: NetworkModel): Promise<void> {
+  async function sync(next: NetworkModel, planned?: ReturnType<typeof planLayout>): Promise<void> {
     const instance = cy.value;
     if (!instance) return;
     const nextStructure = structureOf(next);
     if (nextStructure !== structure) {
       structure = nextStructure;
-      instance.batch(() => {
-        instance.elements().remove();
-        instance.add(elementsOf(next));
-      });
-      await runLayout(instance);
-      // The tab may have changed size while the layout ran: fit to the box as it is now.
-      instance.resize();
-      instance.fit(undefined, 24);
+      const drawn = await drawNetwork(instance, next, planned, () => structure === nextStructure);
+      // A route or selection chosen while the layout ran was not in the elements just added.
+      if (drawn && model.value !== next) await sync(model.value);
       return;
     }
     instance.batch(() => {

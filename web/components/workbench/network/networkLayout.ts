@@ -1,6 +1,8 @@
 import type { Core, CytoscapeOptions, LayoutOptions } from 'cytoscape';
+import { largeGraphLayout, type LayoutGraph, type Positions } from './largeGraphLayout';
+import type { NetworkModel } from './networkModel';
 
-/** Past this many nodes the graph takes the fast path: a draft layout and a lighter renderer. */
+/** Past this many nodes the graph takes the fast path: a force layout of its own and a lighter renderer. */
 export const LARGE_GRAPH_NODES = 500;
 
 type CytoscapeFactory = typeof import('cytoscape');
@@ -15,25 +17,49 @@ export function loadCytoscape(): Promise<CytoscapeFactory> {
   return loading;
 }
 
-/**
- * fCoSE (spectral start, then force-directed refinement). Large graphs keep the spectral draft
- * with a short refinement: the picture settles well under two seconds for 2,000 nodes.
- */
-export function layoutOptions(nodeCount: number): LayoutOptions {
-  const large = nodeCount > LARGE_GRAPH_NODES;
+/** fCoSE (spectral start, then force-directed refinement) with room for the labels: the small graphs' look. */
+export function layoutOptions(): LayoutOptions {
   return {
     name: 'fcose',
-    quality: large ? 'draft' : 'default',
+    quality: 'default',
     randomize: true,
     animate: false,
     fit: true,
     padding: 24,
-    nodeDimensionsIncludeLabels: !large,
-    idealEdgeLength: () => (large ? 40 : 60),
-    nodeRepulsion: () => (large ? 2500 : 6500),
-    numIter: large ? 600 : 2500,
+    nodeDimensionsIncludeLabels: true,
+    idealEdgeLength: () => 60,
+    nodeRepulsion: () => 6500,
+    numIter: 2500,
     packComponents: true,
   } as LayoutOptions;
+}
+
+/** Only what the layout reads, so that little is copied to the worker. */
+function layoutGraphOf(model: NetworkModel): LayoutGraph {
+  return {
+    nodes: model.nodes.map((node) => ({ id: node.id, kind: node.kind, boxWidth: 'boxWidth' in node ? node.boxWidth : undefined })),
+    edges: model.edges.map((edge) => ({ source: edge.source, target: edge.target })),
+  };
+}
+
+/** The large-graph layout in a Web Worker; on the main thread where workers are missing or refused. */
+function layoutInWorker(graph: LayoutGraph): Promise<Positions> {
+  if (typeof Worker === 'undefined') return Promise.resolve(largeGraphLayout(graph));
+  return new Promise((resolve) => {
+    const worker = new Worker(new URL('./largeGraphLayout.worker.ts', import.meta.url), { type: 'module' });
+    const finish = (positions: Positions) => {
+      worker.terminate();
+      resolve(positions);
+    };
+    worker.addEventListener('message', (event: MessageEvent<Positions>) => finish(event.data));
+    worker.addEventListener('error', () => finish(largeGraphLayout(graph)));
+    worker.postMessage(graph);
+  });
+}
+
+/** Starts a large graph's layout at once (null for a small graph, which fCoSE lays out in place). */
+export function planLayout(model: NetworkModel): Promise<Positions> | null {
+  return model.nodes.length > LARGE_GRAPH_NODES ? layoutInWorker(layoutGraphOf(model)) : null;
 }
 
 /** Renderer settings: the fast path draws a texture while panning and hides edges meanwhile. */
@@ -48,10 +74,10 @@ export function rendererOptions(nodeCount: number): Partial<CytoscapeOptions> {
   } as Partial<CytoscapeOptions>;
 }
 
-/** Runs the layout and resolves when it has stopped (fCoSE without animation stops at once). */
-export function runLayout(cy: Core): Promise<void> {
+/** Runs fCoSE and resolves when it has stopped (without animation it stops at once). */
+export function runFcose(cy: Core): Promise<void> {
   return new Promise((resolve) => {
-    const layout = cy.layout(layoutOptions(cy.nodes().length));
+    const layout = cy.layout(layoutOptions());
     layout.one('layoutstop', () => resolve());
     layout.run();
   });

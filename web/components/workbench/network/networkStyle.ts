@@ -9,7 +9,7 @@ const FONT = '"Noto Sans", system-ui, sans-serif';
  * catalysts a double amber border and the word "catalyst", intermediates a hollow dashed teal
  * outline and "◌", steps small squares; the selected route is drawn thick and the rest faded.
  */
-export const networkStyle: StylesheetJson = [
+const nodeStyle: StylesheetJson = [
   {
     selector: 'node[kind = "species"]',
     style: {
@@ -36,6 +36,11 @@ export const networkStyle: StylesheetJson = [
   },
   { selector: 'node[kind = "step"][?inRoute]', style: { width: 17, height: 17, 'background-color': ink[600], color: ink[800], 'font-size': 11, 'font-weight': 'bold' } },
   { selector: 'node[?selected]', style: { 'border-width': 3, 'border-color': ember[600], 'underlay-color': ember[300], 'underlay-opacity': 0.6, 'underlay-padding': 6 } },
+  { selector: 'node[?dimmed]', style: { opacity: 0.3 } },
+];
+
+/** Small graphs: curved arrows with the coefficient as their label. */
+const detailedEdgeStyle: StylesheetJson = [
   {
     selector: 'edge',
     style: {
@@ -46,22 +51,33 @@ export const networkStyle: StylesheetJson = [
   },
   { selector: 'edge[?inRoute]', style: { 'line-color': ink[300], 'target-arrow-color': ink[400] } },
   { selector: 'edge[?inCycle]', style: { 'line-color': ink[700], 'target-arrow-color': ink[700] } },
-  { selector: '[?dimmed]', style: { opacity: 0.3 } },
+  { selector: 'edge[?dimmed]', style: { opacity: 0.3 } },
 ];
+
+/** The stylesheet of graphs up to LARGE_GRAPH_NODES nodes. */
+export const networkStyle: StylesheetJson = [...nodeStyle, ...detailedEdgeStyle];
 
 /**
  * The fast path of large graphs: haystack edges (straight, drawn in bulk) with the direction as a
- * mid-edge arrow and no labels, and node labels only once zoomed in enough to read.
+ * mid-edge arrow and no labels, and node labels only once zoomed in enough to read. Edges get only
+ * the properties they draw with: cytoscape applies every listed property to each of thousands of
+ * edges, so labels' fonts and end arrows would cost time and show nothing.
  */
 const largeGraphStyle: StylesheetJson = [
+  { selector: 'node', style: { 'min-zoomed-font-size': 10 } },
   {
     selector: 'edge',
-    style: { 'curve-style': 'haystack', 'haystack-radius': 0, label: '', 'target-arrow-shape': 'none', 'mid-target-arrow-shape': 'triangle', 'mid-target-arrow-color': graphite[500] },
+    style: {
+      width: 'data(width)', 'curve-style': 'haystack', 'haystack-radius': 0, 'line-color': graphite[300],
+      'mid-target-arrow-shape': 'triangle', 'mid-target-arrow-color': graphite[500], 'arrow-scale': 0.8,
+    },
   },
-  { selector: 'node', style: { 'min-zoomed-font-size': 10 } },
+  { selector: 'edge[?inRoute]', style: { 'line-color': ink[300], 'mid-target-arrow-color': ink[400] } },
+  { selector: 'edge[?inCycle]', style: { 'line-color': ink[700], 'mid-target-arrow-color': ink[700] } },
+  { selector: 'edge[?dimmed]', style: { opacity: 0.3 } },
 ];
 
 /** The stylesheet for a graph of `nodeCount` nodes. */
 export function networkStyleFor(nodeCount: number): StylesheetJson {
-  return nodeCount > LARGE_GRAPH_NODES ? [...networkStyle, ...largeGraphStyle] : networkStyle;
+  return nodeCount > LARGE_GRAPH_NODES ? [...nodeStyle, ...largeGraphStyle] : networkStyle;
 }

@@ -1,0 +1,40 @@
+import type { Core, ElementDefinition } from 'cytoscape';
+import type { Positions } from './largeGraphLayout';
+import { loadCytoscape, planLayout, rendererOptions, runFcose } from './networkLayout';
+import type { NetworkModel } from './networkModel';
+import { networkStyleFor } from './networkStyle';
+
+/** The model as cytoscape elements, in one array so that they are added in one batch, placed when positions are known. */
+export function elementsOf(model: NetworkModel, positions: Positions | null = null): ElementDefinition[] {
+  return [
+    ...model.nodes.map((data) => ({ group: 'nodes' as const, data: { ...data }, position: positions?.[data.id] })),
+    ...model.edges.map((data) => ({ group: 'edges' as const, data: { ...data } })),
+  ];
+}
+
+/** An empty graph in `container` with the style and renderer settings for a graph of `nodeCount` nodes. */
+export async function createNetworkCore(container: HTMLElement, nodeCount: number): Promise<Core> {
+  const cytoscape = await loadCytoscape();
+  return cytoscape({ container, style: networkStyleFor(nodeCount), elements: [], ...rendererOptions(nodeCount) });
+}
+
+/**
+ * Replaces the graph's elements with the model's, lays them out and fits them to the box. A large
+ * graph's positions (`planned`, from a worker) are awaited first and the elements added already in
+ * place: elements added before their positions would be drawn once, all piled at one point, and
+ * styled and measured twice. Returns false, having changed nothing, when `isCurrent` says that a
+ * newer model has come meanwhile.
+ */
+export async function drawNetwork(cy: Core, model: NetworkModel, planned = planLayout(model), isCurrent = () => true): Promise<boolean> {
+  const positions = planned ? await planned : null;
+  if (!isCurrent()) return false;
+  cy.batch(() => {
+    cy.elements().remove();
+    cy.add(elementsOf(model, positions));
+  });
+  if (!positions) await runFcose(cy);
+  // The tab may have changed size while the layout ran: fit to the box as it is now.
+  cy.resize();
+  cy.fit(undefined, 24);
+  return true;
+}

@@ -48,3 +48,18 @@ describe('POST /api/analyse', () => {
     expect(missing.body.error.details[0].path).toEqual(['text']);
   });
 });
+
+describe('POST /api/analyse rate limit', () => {
+  it('allows 600 analyses a minute per person (typing with a 120 ms pause), then answers 429 RATE_LIMITED', async () => {
+    const client = await signedInAgent(t.url, DEMO_PEOPLE[1].email);
+    const statuses: number[] = [];
+    for (let batch = 0; batch < 12; batch += 1) {
+      const answers = await Promise.all(Array.from({ length: 50 }, () => client.post('/api/analyse', { text: 'N1: NO + O3 -> NO2 + O2' })));
+      statuses.push(...answers.map((res) => res.status));
+    }
+    expect(statuses.filter((status) => status !== 200)).toEqual([]);
+    const over = await client.post('/api/analyse', { text: 'N1: NO + O3 -> NO2 + O2' });
+    expect(over.status).toBe(429);
+    expect(over.body.error.code).toBe('RATE_LIMITED');
+  });
+});

@@ -39,7 +39,8 @@ async function signIn(page: Page): Promise<void> {
 
 /** The whole client's JavaScript, gzipped: what the first screen would cost without lazy loading. */
 function wholeClientKb(): number {
-  const assets = path.resolve('dist', 'web', 'assets');
+  // The build the server serves: WEB_DIR names it when it is not dist/web, as for the server.
+  const assets = path.resolve(process.env.WEB_DIR ?? path.join('dist', 'web'), 'assets');
   return readdirSync(assets).filter((file) => file.endsWith('.js')).reduce((sum, file) => sum + gzipKb(readFileSync(path.join(assets, file))), 0);
 }
 

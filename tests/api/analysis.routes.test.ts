@@ -63,3 +63,12 @@ describe('POST /api/analyse rate limit', () => {
     expect(over.body.error.code).toBe('RATE_LIMITED');
   });
 });
+
+describe('POST /api/analyse timing', () => {
+  it('names the server’s share of the answer in Server-Timing (analysis, then JSON)', async () => {
+    const client = await signedInAgent(t.url, DEMO_PEOPLE[0].email);
+    const res = await client.post('/api/analyse', { text: 'N1: NO + O3 -> NO2 + O2' });
+    expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
+    expect(res.headers['server-timing']).toMatch(/^analyse;dur=\d+(\.\d)?, json;dur=\d+(\.\d)?$/);
+  });
+});

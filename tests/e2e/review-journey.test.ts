@@ -105,6 +105,14 @@ describe('the review journey in the browser', () => {
     await thread.waitFor();
     await expect(thread.locator('.remark-thread__label').textContent()).resolves.toBe('N1');
     await page.locator('.cm-remark-gutter .cm-remark-marker').first().waitFor();
+    // The remark also sits under its step's line in the editor and under its row in Steps.
+    const inline = page.locator('.cm-remark-inline');
+    await inline.waitFor();
+    await expect(inline.evaluate((block) => block.previousElementSibling?.textContent)).resolves.toMatch(/^N1:/);
+    await expect(inline.textContent()).resolves.toMatch(/Kofi Glasswort.*Is the N1 rate from the current JPL evaluation\?.*0 replies.*open/);
+    await page.locator('[data-panel="steps"]').click();
+    const n1Row = page.locator('tbody tr', { has: page.locator('td:first-child', { hasText: /^N1$/ }) });
+    await expect(n1Row.locator('xpath=following-sibling::tr[1]').textContent()).resolves.toMatch(/Kofi Glasswort.*Is the N1 rate/);
     await screenshot(page, 'review-4-remark');
     await page.context().close();
   });
@@ -126,6 +134,18 @@ describe('the review journey in the browser', () => {
     await thread.waitFor();
     await expect(thread.locator('.remark-thread__label').textContent()).resolves.toBe('N1');
     expect(await thread.getByText('No longer matching').count()).toBe(0);
+    // Under the new N1 line too; from the editor, Tab reaches the remark and Enter opens its thread.
+    const inline = page.locator('.cm-remark-inline');
+    await expect.poll(() => inline.evaluate((block) => block.previousElementSibling?.textContent)).toContain(NEW_N1.slice(0, 20));
+    await page.locator('[data-panel="steps"]').click();
+    await page.locator('.cm-line', { hasText: '%title' }).click();
+    await page.keyboard.press('Control+Home');
+    await page.keyboard.press('Tab');
+    await expect(page.evaluate(() => document.activeElement?.className)).resolves.toContain('cm-remark-inline__item');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('[data-panel="remarks"]').getAttribute('aria-selected')).toBe('true');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toMatch(/^remark-thread-\d+$/);
+    await expect(page.locator('.cm-selected-step').textContent()).resolves.toMatch(/^N1:/);
     await screenshot(page, 'review-5-remark-followed');
     await page.context().close();
   });
@@ -135,14 +155,26 @@ describe('the review journey in the browser', () => {
     await giveVerdict(REVIEWERS[1], 'Mei Tidewell', 'Endorse', 'review-7-second-endorsement');
   });
 
-  it('curator adopts r2 from To adopt', async () => {
+  it('curator finds r2 in To adopt and adopts it on the workbench; header and queue follow without a reload', async () => {
     const page = await signedInPage(CURATOR);
     await page.goto(`${t.url}/to-adopt`);
     const row = page.locator('tbody tr', { hasText: 'NOx and ozone, for review' });
     await row.getByText('2 of 2').waitFor();
     await screenshot(page, 'review-8-to-adopt');
-    await row.getByRole('button', { name: /^Adopt r2/ }).click();
-    await page.getByText('No endorsed revisions to adopt').waitFor();
+    await row.getByRole('link', { name: 'NOx and ozone, for review' }).click();
+    await page.locator('[data-panel="review"]').click();
+    const badge = page.locator('.workbench-header .library-round-state-tag');
+    const queueCount = page.locator('[data-queue="to-adopt"] .p-badge');
+    await expect.poll(() => badge.textContent()).toBe('endorsed');
+    await expect(queueCount.textContent()).resolves.toBe('1');
+    // A reload would make a fresh page; a marker on this one shows none happened.
+    await page.evaluate(() => Object.assign(window, { notReloaded: true }));
+    await page.getByRole('button', { name: 'Adopt r2' }).click();
+    await expect.poll(() => badge.textContent()).toBe('adopted');
+    await expect.poll(() => page.locator('.workbench-header .p-select-label').textContent()).toMatch(/^r2 ★ reference/);
+    await expect.poll(() => queueCount.count()).toBe(0);
+    await expect(page.evaluate(() => (window as unknown as { notReloaded?: boolean }).notReloaded)).resolves.toBe(true);
+    await screenshot(page, 'review-8-adopted-on-workbench');
     await openSection(page, 'history');
     await page.locator('tbody tr', { hasText: 'r2' }).getByText('reference').waitFor();
     await screenshot(page, 'review-9-history-reference');
@@ -162,6 +194,31 @@ describe('the review journey in the browser', () => {
     await screenshot(page, 'review-10-compare-1920');
     await page.setViewportSize({ width: 1280, height: 900 });
     await screenshot(page, 'review-10-compare-1280');
+    await page.context().close();
+  });
+
+  it('the eight sections fit their tab row at 1280 and 1920 px and answer the keyboard and the address hash', async () => {
+    const page = await signedInPage(AUTHOR);
+    for (const width of [1280, 1920]) {
+      await page.setViewportSize({ width, height: 900 });
+      await page.goto(`${t.url}/m/${SLUG}#history`);
+      await expect.poll(() => page.locator('[data-panel="history"]').getAttribute('aria-selected')).toBe('true');
+      const row = page.locator('.workbench-panel-tabs .p-tablist-tab-list');
+      const fit = await row.evaluate((list) => ({ scroll: list.scrollWidth, client: list.clientWidth }));
+      expect(fit.scroll, `tabs at ${width} px`).toBeLessThanOrEqual(fit.client);
+      const rowBox = (await row.boundingBox())!;
+      for (const tab of await page.locator('.workbench-panel-tabs [data-panel]').all()) {
+        const box = (await tab.boundingBox())!;
+        expect(box.x + box.width, `${await tab.textContent()} at ${width} px`).toBeLessThanOrEqual(rowBox.x + rowBox.width + 0.5);
+        expect((await tab.textContent())!.trim()).not.toBe('');
+      }
+      await screenshot(page, `review-14-tabs-${width}`);
+    }
+    await page.locator('[data-panel="steps"]').click();
+    await page.keyboard.press('ArrowRight');
+    await expect(page.evaluate(() => document.activeElement?.getAttribute('data-panel'))).resolves.toBe('species');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('[data-panel="species"]').getAttribute('aria-selected')).toBe('true');
     await page.context().close();
   });
 

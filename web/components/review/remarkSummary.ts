@@ -7,8 +7,8 @@ export interface RemarkSummary {
   firstLine: string;
   replies: string;
   state: Remark['state'];
-  /** What a screen reader announces for the control that opens the thread. */
-  openLabel: string;
+  /** The tooltip of the control that opens the thread: the whole first line, which may be cut on screen. */
+  hint: string;
 }
 
 /**
@@ -24,13 +24,14 @@ export function firstLineOf(bodyHtml: string): string {
 
 export function summariseRemark(remark: Remark): RemarkSummary {
   const count = remark.replies.length;
+  const firstLine = firstLineOf(remark.bodyHtml);
   const replies = count === 1 ? '1 reply' : `${count} replies`;
   return {
     id: remark.id,
     author: remark.authorName,
-    firstLine: firstLineOf(remark.bodyHtml),
+    firstLine,
     replies,
     state: remark.state,
-    openLabel: `Open the ${remark.state} remark by ${remark.authorName} (${replies}) in the Remarks section`,
+    hint: `${firstLine}\n(opens the thread in the Remarks section)`,
   };
 }

@@ -41,7 +41,7 @@ class RemarksUnderStep extends WidgetType {
     button.type = 'button';
     button.className = `cm-remark-inline__item cm-remark-inline__item--${summary.state}`;
     button.dataset.remarkId = String(summary.id);
-    button.title = 'Open this thread in the Remarks section';
+    button.title = summary.hint;
     const icon = button.appendChild(document.createElement('i'));
     icon.className = summary.state === 'open' ? 'pi pi-comment' : 'pi pi-check';
     icon.setAttribute('aria-hidden', 'true');
@@ -65,7 +65,9 @@ class RemarksUnderStep extends WidgetType {
 
 const inlineTheme = EditorView.baseTheme({
   '.cm-remark-inline': {
-    display: 'flex', flexDirection: 'column', gap: '2px', margin: '2px 0 4px 0.5em',
+    // Padding, not margin: the editor measures a block's box to line the gutter up with the text.
+    // Inline-size containment: a long first line is cut with an ellipsis instead of widening every line.
+    display: 'flex', flexDirection: 'column', gap: '2px', padding: '2px 0 4px 0.5em', contain: 'inline-size',
     fontFamily: "'Noto Sans', system-ui, sans-serif", fontSize: '0.82em', lineHeight: '1.4',
   },
   '.cm-remark-inline__item': {

@@ -27,3 +27,20 @@ export const UpdateSetBody = z
 export type UpdateSetBody = z.infer<typeof UpdateSetBody>;
 
 export const SetParams = z.object({ id: z.coerce.number().int().positive() });
+
+/** A set as `GET /api/sets` lists it (the web receives it through `Jsonified`). */
+export interface SetSummary {
+  id: number;
+  title: string;
+  audience: string;
+  owner: { id: number; name: string };
+  itemCount: number;
+  youOwn: boolean;
+  updatedAt: Date;
+}
+
+/** `GET /api/sets/:id`, and what creating or changing a set answers: its items in order. */
+export interface SetDetail extends Omit<SetSummary, 'itemCount'> {
+  items: { position: number; mechanism: { slug: string; title: string }; revision: number; note: string }[];
+  createdAt: Date;
+}

@@ -6,7 +6,7 @@ import * as mechanisms from '../mechanisms/mechanisms.queries';
 import * as revisions from '../revisions/revisions.queries';
 import { loadOwnSet, loadReadableSet, visibleMechanismIds } from './set-access';
 import * as sets from './sets.queries';
-import type { CreateSetBody, SetItemInput, UpdateSetBody } from './sets.schemas';
+import type { CreateSetBody, SetDetail, SetItemInput, SetSummary, UpdateSetBody } from './sets.schemas';
 
 /** Each item's mechanism must be visible to the instructor and its revision must exist. */
 async function resolveItems(trx: Knex.Transaction, viewer: Viewer, items: SetItemInput[]) {
@@ -22,7 +22,7 @@ async function resolveItems(trx: Knex.Transaction, viewer: Viewer, items: SetIte
   return resolved;
 }
 
-async function presentSet(db: Knex | Knex.Transaction, viewer: Viewer, id: number) {
+async function presentSet(db: Knex | Knex.Transaction, viewer: Viewer, id: number): Promise<SetDetail> {
   const { set, items } = await loadReadableSet(db, viewer, id);
   const [owner] = await mechanisms.peopleByIds(db, [set.ownerId]);
   const shown = await Promise.all(items.map(async (item) => {
@@ -66,7 +66,7 @@ export async function deleteSet(db: Knex, viewer: Viewer, id: number): Promise<v
 export const getSet = presentSet;
 
 /** Sets the viewer may read: their own, and those whose every mechanism they may see. */
-export async function listSets(db: Knex, viewer: Viewer) {
+export async function listSets(db: Knex, viewer: Viewer): Promise<SetSummary[]> {
   const all = await sets.listAll(db);
   const items = await sets.itemsOfSets(db, all.map((set) => set.id));
   const visible = await visibleMechanismIds(db, viewer, items.map((item) => item.mechanismId));

@@ -2,10 +2,12 @@ import { describe, expect, expectTypeOf, it } from 'vitest';
 import type { CatalogueEntry as ServerEntry } from '@api/catalogue/catalogue.schemas';
 import type { AttachmentMeta } from '@api/attachments/attachments.schemas';
 import type { CapturedMail as ServerMail } from '@api/mail/inbox.schemas';
+import type { SetDetail as ServerSetDetail } from '@api/sets/sets.schemas';
 import type { Attachment } from '@web/services/attachments';
 import type { CatalogueEntry } from '@web/services/catalogue';
 import type { CapturedMail } from '@web/services/inbox';
 import type { Jsonified } from '@web/services/jsonified';
+import type { SetDetail } from '@web/services/sets';
 
 /** What the wire does to a server value: the JSON the web parses. */
 const overTheWire = <T>(value: T) => JSON.parse(JSON.stringify(value)) as Jsonified<T>;
@@ -19,7 +21,7 @@ describe('Jsonified', () => {
   });
 
   // Checked by the type-check (vue-tsc) of `npm test`: a hand copy that drifts from the server fails there.
-  it('gives the web the server\'s own catalogue, attachment and inbox shapes with string dates', () => {
+  it('gives the web the server\'s own catalogue, attachment, inbox and set shapes with string dates', () => {
     expectTypeOf<CatalogueEntry>().toEqualTypeOf<Jsonified<ServerEntry>>();
     expectTypeOf<CatalogueEntry['updatedAt']>().toEqualTypeOf<string>();
     expectTypeOf<CatalogueEntry['structure']>().toEqualTypeOf<Jsonified<ServerEntry['structure']>>();
@@ -27,5 +29,7 @@ describe('Jsonified', () => {
     expectTypeOf<Attachment>().toEqualTypeOf<Jsonified<AttachmentMeta>>();
     expectTypeOf<CapturedMail['receivedAt']>().toEqualTypeOf<string>();
     expectTypeOf<CapturedMail>().toEqualTypeOf<Jsonified<ServerMail>>();
+    expectTypeOf<SetDetail>().toEqualTypeOf<Jsonified<ServerSetDetail>>();
+    expectTypeOf<SetDetail['createdAt']>().toEqualTypeOf<string>();
   });
 });

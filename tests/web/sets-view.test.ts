@@ -16,6 +16,7 @@ const summary: sets.SetSummary = {
 };
 const detail: sets.SetDetail = {
   ...summary,
+  createdAt: '2026-11-28T09:00:00Z',
   items: [
     { position: 1, mechanism: { slug: 'stratospheric-nox', title: 'Ozone and NOx' }, revision: 2, note: 'Start here' },
     { position: 2, mechanism: { slug: 'clo-dimer', title: 'ClO dimer cycle' }, revision: 1, note: '' },

@@ -1,20 +1,11 @@
 import type { ExportFormat } from '@api/exports/exports.schemas';
-import type { CreateSetBody } from '@api/sets/sets.schemas';
+import type { CreateSetBody, SetDetail as ServerSetDetail, SetSummary as ServerSetSummary } from '@api/sets/sets.schemas';
 import { http } from './http';
+import type { Jsonified } from './jsonified';
 
-export interface SetSummary {
-  id: number;
-  title: string;
-  audience: string;
-  owner: { id: number; name: string };
-  itemCount: number;
-  youOwn: boolean;
-  updatedAt: string;
-}
-
-export interface SetDetail extends Omit<SetSummary, 'itemCount'> {
-  items: { position: number; mechanism: { slug: string; title: string }; revision: number; note: string }[];
-}
+/** The sets API's answers as JSON: the server's types with dates as strings. */
+export type SetSummary = Jsonified<ServerSetSummary>;
+export type SetDetail = Jsonified<ServerSetDetail>;
 
 export type SetInput = CreateSetBody;
 

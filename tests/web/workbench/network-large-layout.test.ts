@@ -88,6 +88,13 @@ describe('planLayout and drawNetwork', () => {
     cy.destroy();
   });
 
+  it('keeps the layout of a graph seen again (the panel is rebuilt each time its tab opens)', () => {
+    const model = generatedModel(500);
+    const again = generatedModel(500);
+    expect(planLayout(again)).toBe(planLayout(model));
+    expect(planLayout(generatedModel(501))).not.toBe(planLayout(model));
+  });
+
   it('changes nothing when a newer model came while the layout ran', async () => {
     const model = generatedModel(500);
     const cy = cytoscape({ headless: true });

@@ -15,7 +15,7 @@ interface SpeciesPoint extends SimulationNodeDatum {
 
 /** Forces tuned on generated alkyl-peroxy mechanisms of 500–3,000 nodes; the tick count bounds the time. */
 const SPECIES_GAP = 90;
-const TICKS = 160;
+const TICKS = 100;
 const STEP_SPACING = 16;
 
 /** Each step's drawn species, in the order of its arrows. */

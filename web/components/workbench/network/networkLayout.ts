@@ -57,9 +57,23 @@ function layoutInWorker(graph: LayoutGraph): Promise<Positions> {
   });
 }
 
-/** Starts a large graph's layout at once (null for a small graph, which fCoSE lays out in place). */
+/** Layouts of the last few large graphs: the panel is built anew each time its tab opens. */
+const recentLayouts = new Map<string, Promise<Positions>>();
+const RECENT_LAYOUTS = 3;
+
+/**
+ * Starts a large graph's layout at once (null for a small graph, which fCoSE lays out in place).
+ * The layout is deterministic, so a graph of the same nodes and arrows reuses the last positions.
+ */
 export function planLayout(model: NetworkModel): Promise<Positions> | null {
-  return model.nodes.length > LARGE_GRAPH_NODES ? layoutInWorker(layoutGraphOf(model)) : null;
+  if (model.nodes.length <= LARGE_GRAPH_NODES) return null;
+  const graph = layoutGraphOf(model);
+  const key = JSON.stringify(graph);
+  const planned = recentLayouts.get(key) ?? layoutInWorker(graph);
+  recentLayouts.delete(key);
+  recentLayouts.set(key, planned);
+  if (recentLayouts.size > RECENT_LAYOUTS) recentLayouts.delete(recentLayouts.keys().next().value!);
+  return planned;
 }
 
 /** Renderer settings: the fast path draws a texture while panning and hides edges meanwhile. */

@@ -175,6 +175,11 @@ describe('the review journey in the browser', () => {
     await expect.poll(() => queueCount.count()).toBe(0);
     await expect(page.evaluate(() => (window as unknown as { notReloaded?: boolean }).notReloaded)).resolves.toBe(true);
     await screenshot(page, 'review-8-adopted-on-workbench');
+    // The library, reached through the app's own link, shows the adoption as well.
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Library' }).click();
+    const listed = page.locator('tbody tr', { hasText: 'NOx and ozone, for review' });
+    await expect.poll(() => listed.locator('.library-round-state-tag').textContent()).toBe('adopted');
+    await expect(page.evaluate(() => (window as unknown as { notReloaded?: boolean }).notReloaded)).resolves.toBe(true);
     await openSection(page, 'history');
     await page.locator('tbody tr', { hasText: 'r2' }).getByText('reference').waitFor();
     await screenshot(page, 'review-9-history-reference');

@@ -17,7 +17,9 @@ export function workbenchStatus(analysis: MechanismAnalysis): WorkbenchStatus {
   const errors = analysis.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = analysis.diagnostics.filter((d) => d.severity === 'warning').length;
   const unbalanced = analysis.steps.filter((step) => !step.balanced).length;
-  const productive = analysis.routes.filter((route) => route.kind === 'productive').length;
+  // The overall route is added after the basis when it is a combination of basis routes: it is
+  // not a route of its own, so it is not counted (it is counted when the basis has it, or it is direct).
+  const productive = analysis.routes.filter((route) => route.kind === 'productive' && (route.basis || route.direct)).length;
   const catalysts = analysis.species.filter((species) => species.role === 'catalyst').length;
   const parts = [
     plural(analysis.steps.length, 'step'),

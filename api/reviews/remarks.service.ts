@@ -8,13 +8,13 @@ import * as revisions from '../revisions/revisions.queries';
 import { renderMarkdown } from './markdown';
 import { anchorOf, findStep, lineText } from './remark-anchor';
 import * as remarks from './remarks.queries';
-import type { RemarkBody } from './reviews.schemas';
+import type { Remark, RemarkBody, RemarkReply } from './reviews.schemas';
 import { findVisibleRound, loadRound } from './round-context';
 import { assertActive } from './round-state';
 import { nameOf } from './rounds.service';
 
 /** An assigned reviewer or a curator remarks on one step of the round's current revision. */
-export async function addRemark(db: Knex, viewer: Viewer, roundId: number, input: RemarkBody) {
+export async function addRemark(db: Knex, viewer: Viewer, roundId: number, input: RemarkBody): Promise<Remark> {
   return db.transaction(async (trx) => {
     const { round, mechanism, access, assignedHere } = await loadRound(trx, viewer, roundId);
     if (!assignedHere && !access.isCurator) throw new ForbiddenError('Only assigned reviewers and curators leave remarks');
@@ -40,7 +40,7 @@ export async function addRemark(db: Knex, viewer: Viewer, roundId: number, input
   });
 }
 
-export async function listRemarks(db: Knex, viewer: Viewer, roundId: number) {
+export async function listRemarks(db: Knex, viewer: Viewer, roundId: number): Promise<Remark[]> {
   await findVisibleRound(db, viewer, roundId);
   const list = await remarks.listForRound(db, roundId);
   const replies = await remarks.repliesFor(db, list.map((remark) => remark.id));
@@ -54,7 +54,7 @@ async function loadRemark(trx: Knex.Transaction, viewer: Viewer, remarkId: numbe
 }
 
 /** Anyone taking part in the round answers in the thread. */
-export async function replyToRemark(db: Knex, viewer: Viewer, remarkId: number, body: string) {
+export async function replyToRemark(db: Knex, viewer: Viewer, remarkId: number, body: string): Promise<RemarkReply> {
   return db.transaction(async (trx) => {
     const { remark, access, assignedHere } = await loadRemark(trx, viewer, remarkId);
     if (!takesPart(access) && !assignedHere) throw new ForbiddenError('Only the people taking part in this review reply to remarks');

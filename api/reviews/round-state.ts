@@ -1,7 +1,8 @@
 import { InvalidStateError } from '../errors';
 
-export type RoundState = 'open' | 'revise-requested' | 'endorsed' | 'adopted' | 'declined' | 'withdrawn';
-export type Verdict = 'endorse' | 'revise' | 'decline';
+import type { RoundState, Verdict } from './reviews.schemas';
+
+export type { RoundState, Verdict };
 
 /** A round in progress; the others are closed for good. */
 export const ACTIVE_STATES: readonly RoundState[] = ['open', 'revise-requested', 'endorsed'];

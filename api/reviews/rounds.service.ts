@@ -8,6 +8,7 @@ import * as revisions from '../revisions/revisions.queries';
 import * as users from '../users/users.queries';
 import { changeState, findVisibleRound, loadRound } from './round-context';
 import { assertActive, assertState } from './round-state';
+import type { RoundDetail, RoundListItem } from './reviews.schemas';
 import * as rounds from './rounds.queries';
 
 /** Puts a revision (the latest unless named) up for review; one round per mechanism at a time. */
@@ -29,7 +30,7 @@ export async function openRound(db: Knex, viewer: Viewer, slug: string, revision
   return getRound(db, viewer, id);
 }
 
-export async function getRound(db: Knex, viewer: Viewer, roundId: number) {
+export async function getRound(db: Knex, viewer: Viewer, roundId: number): Promise<RoundDetail> {
   const { round, mechanism } = await findVisibleRound(db, viewer, roundId);
   const [revision, reviewers, verdicts, timeline] = await Promise.all([
     revisions.findById(db, round.revisionId),
@@ -47,7 +48,7 @@ export async function getRound(db: Knex, viewer: Viewer, roundId: number) {
   };
 }
 
-export async function listRounds(db: Knex, viewer: Viewer, slug: string) {
+export async function listRounds(db: Knex, viewer: Viewer, slug: string): Promise<RoundListItem[]> {
   const { mechanism } = await loadVisible(db, slug, viewer);
   return rounds.listForMechanism(db, mechanism.id);
 }

@@ -1,4 +1,5 @@
 import type { MechanismAnalysis } from '@api/analysis/analysis.schemas';
+import type { RoundState } from '@api/reviews/reviews.schemas';
 import { http, request } from './http';
 
 /**
@@ -6,7 +7,7 @@ import { http, request } from './http';
  * review"). The server has no response schemas for these yet, so their shapes are written here.
  */
 export type Visibility = 'public' | 'private';
-export type RoundState = 'open' | 'revise-requested' | 'endorsed' | 'adopted' | 'declined' | 'withdrawn';
+export type { RoundState };
 
 export interface PersonRef {
   id: number;

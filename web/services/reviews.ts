@@ -1,96 +1,20 @@
+import type * as server from '@api/reviews/reviews.schemas';
+import type { RoundState, Verdict } from '@api/reviews/reviews.schemas';
 import { http } from './http';
-import type { RoundState } from './mechanisms';
+import type { Jsonified } from './jsonified';
 
 /**
- * Review rounds, remarks, verdicts and the two queues (DEVELOPERS.md, "repository and review").
- * The server has no response schemas for these, so their shapes are written here.
+ * Review rounds, remarks, verdicts and the two queues (DEVELOPERS.md, "repository and review"):
+ * the server's answer types, dates as strings.
  */
-export type { RoundState };
-export type Verdict = 'endorse' | 'revise' | 'decline';
-
-export interface RoundVerdict {
-  reviewerId: number;
-  reviewerName: string;
-  revision: number;
-  verdict: Verdict;
-  comment: string;
-  createdAt: string;
-}
-
-/** One audit-log entry about the round: `round.opened`, `round.state-changed`, `verdict.given`… */
-export interface RoundEvent {
-  id: number;
-  actorId: number | null;
-  action: string;
-  details: Record<string, unknown>;
-  createdAt: string;
-}
-
-/** `GET /api/rounds/:id`. */
-export interface RoundDetail {
-  id: number;
-  state: RoundState;
-  mechanism: { slug: string; title: string };
-  revision: number;
-  endorsementsNeeded: number;
-  endorsements: number;
-  reviewers: Array<{ id: number; name: string }>;
-  verdicts: RoundVerdict[];
-  timeline: RoundEvent[];
-  createdAt: string;
-  closedAt: string | null;
-}
-
-/** A row of `GET /api/mechanisms/:slug/rounds`, newest first. */
-export interface RoundListItem {
-  id: number;
-  state: RoundState;
-  revision: number;
-  createdAt: string;
-  closedAt: string | null;
-}
-
-export interface RemarkReply {
-  id: number;
-  remarkId: number;
-  body: string;
-  bodyHtml: string;
-  authorId: number;
-  authorName: string;
-  createdAt: string;
-}
-
-/** A remark with its thread; `matching: false` once its step is gone (the original context stays). */
-export interface Remark {
-  id: number;
-  state: 'open' | 'settled';
-  matching: boolean;
-  body: string;
-  bodyHtml: string;
-  authorId: number;
-  authorName: string;
-  revision: number;
-  stepLabel: string | null;
-  stepNormalised: string;
-  stepLine: number;
-  originalRevision: number;
-  originalLabel: string | null;
-  originalNormalised: string;
-  originalLine: number;
-  originalContext: string;
-  createdAt: string;
-  replies: RemarkReply[];
-}
-
-/** A row of either queue. */
-export interface QueuedRound {
-  id: number;
-  state: RoundState;
-  slug: string;
-  title: string;
-  revision: number;
-  updatedAt: string;
-}
+export type { RoundState, Verdict };
+export type RoundVerdict = Jsonified<server.RoundVerdict>;
+export type RoundEvent = Jsonified<server.RoundEvent>;
+export type RoundDetail = Jsonified<server.RoundDetail>;
+export type RoundListItem = Jsonified<server.RoundListItem>;
+export type RemarkReply = Jsonified<server.RemarkReply>;
+export type Remark = Jsonified<server.Remark>;
+export type QueuedRound = Jsonified<server.QueuedRound>;
 
 const roundPath = (id: number) => `/api/rounds/${id}`;
 
@@ -107,7 +31,7 @@ export const adoptRound = (id: number) => http.post<RoundDetail>(`${roundPath(id
 export const listRemarks = (roundId: number) => http.get<Remark[]>(`${roundPath(roundId)}/remarks`);
 /** `step` is the step's label (`B2`) or its position (`#3`). */
 export const addRemark = (roundId: number, step: string, body: string) =>
-  http.post<Omit<Remark, 'replies'>>(`${roundPath(roundId)}/remarks`, { step, body });
+  http.post<Remark>(`${roundPath(roundId)}/remarks`, { step, body });
 export const replyToRemark = (remarkId: number, body: string) => http.post<RemarkReply>(`/api/remarks/${remarkId}/replies`, { body });
 export const settleRemark = (remarkId: number) => http.post<void>(`/api/remarks/${remarkId}/settle`);
 

@@ -1,6 +1,6 @@
 import type { Core, ElementDefinition } from 'cytoscape';
 import type { Positions } from './largeGraphLayout';
-import { loadCytoscape, planLayout, rendererOptions, runFcose } from './networkLayout';
+import { LARGE_GRAPH_NODES, loadCytoscape, planLayout, rendererOptions, runFcose } from './networkLayout';
 import type { NetworkModel } from './networkModel';
 import { networkStyleFor } from './networkStyle';
 
@@ -14,7 +14,7 @@ export function elementsOf(model: NetworkModel, positions: Positions | null = nu
 
 /** An empty graph in `container` with the style and renderer settings for a graph of `nodeCount` nodes. */
 export async function createNetworkCore(container: HTMLElement, nodeCount: number): Promise<Core> {
-  const cytoscape = await loadCytoscape();
+  const cytoscape = await loadCytoscape(nodeCount <= LARGE_GRAPH_NODES);
   return cytoscape({ container, style: networkStyleFor(nodeCount), elements: [], ...rendererOptions(nodeCount) });
 }
 

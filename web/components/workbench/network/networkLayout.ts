@@ -6,15 +6,21 @@ import type { NetworkModel } from './networkModel';
 export const LARGE_GRAPH_NODES = 500;
 
 type CytoscapeFactory = typeof import('cytoscape');
-let loading: Promise<CytoscapeFactory> | null = null;
+let core: Promise<CytoscapeFactory> | null = null;
+let withFcose: Promise<CytoscapeFactory> | null = null;
 
-/** cytoscape and the fCoSE layout, fetched on first use so they stay out of the first screen's bundle. */
-export function loadCytoscape(): Promise<CytoscapeFactory> {
-  loading ??= Promise.all([import('cytoscape'), import('cytoscape-fcose')]).then(([core, fcose]) => {
-    core.default.use(fcose.default);
-    return core.default;
+/**
+ * cytoscape, fetched on first use so that it stays out of the first screen's bundle, with the fCoSE
+ * layout when `fcose` is asked for (small graphs): large graphs bring their own layout and skip it.
+ */
+export function loadCytoscape(fcose = true): Promise<CytoscapeFactory> {
+  core ??= import('cytoscape').then((module) => module.default);
+  if (!fcose) return core;
+  withFcose ??= Promise.all([core, import('cytoscape-fcose')]).then(([cytoscape, extension]) => {
+    cytoscape.use(extension.default);
+    return cytoscape;
   });
-  return loading;
+  return withFcose;
 }
 
 /** fCoSE (spectral start, then force-directed refinement) with room for the labels: the small graphs' look. */
@@ -88,8 +94,9 @@ export function rendererOptions(nodeCount: number): Partial<CytoscapeOptions> {
   } as Partial<CytoscapeOptions>;
 }
 
-/** Runs fCoSE and resolves when it has stopped (without animation it stops at once). */
-export function runFcose(cy: Core): Promise<void> {
+/** Runs fCoSE (fetched first if need be) and resolves when it has stopped (without animation it stops at once). */
+export async function runFcose(cy: Core): Promise<void> {
+  await loadCytoscape(true);
   return new Promise((resolve) => {
     const layout = cy.layout(layoutOptions());
     layout.one('layoutstop', () => resolve());

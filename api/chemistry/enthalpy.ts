@@ -1,7 +1,7 @@
 import type { Fraction } from './fraction';
 import type { StepModel } from './step-model';
 import { roundNoise } from './thermo-lookup';
-import { addToNet, netEnthalpy, reactionEnthalpy, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
+import { addToNet, netEnthalpy, reactionEnthalpy, type NetReaction, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
 
 /** A lookup that asks the underlying table once per key. */
 export function cachedLookup(lookup: EnthalpyLookup): EnthalpyLookup {
@@ -26,7 +26,8 @@ export interface StepEnthalpy {
 /** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
   const net = stepNet;
-  net.clear();
+  net.keys.length = 0;
+  net.coefs.length = 0;
   let photolysis = false;
   for (const term of step.reactants) {
     addToNet(net, term.key, -term.coef.toNumber());
@@ -37,9 +38,9 @@ export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEntha
   return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
 }
 
-// One scratch net reaction for every step (a step is computed synchronously, and a Map per step
+// One scratch net reaction for every step (a step is computed synchronously, and a table per step
 // was garbage the collector had to sweep on large mechanisms).
-const stepNet = new Map<string, number>();
+const stepNet: NetReaction = { keys: [], coefs: [] };
 
 export interface RouteEnthalpy {
   /** Σ σ ΔH(step) when every step's ΔH is known, else ΔH of the net reaction. */

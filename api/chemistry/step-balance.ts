@@ -1,8 +1,9 @@
+import { ELEMENTS, elementBySymbol } from './elements';
 import type { StepModel, StepTerm } from './step-model';
 
 /** Conservation of elements, charge and sites in one step (products − reactants). */
 export interface StepBalance {
-  /** Non-zero element differences only. */
+  /** Non-zero element differences only, in the order the elements first appear in the step. */
   imbalance: Record<string, number>;
   chargeDelta: number;
   siteDelta: number;
@@ -25,22 +26,27 @@ function denominatorLcm(step: StepModel): number {
   return common;
 }
 
-// One scratch table for every step: a step is balanced synchronously, and a fresh Map per step
-// was a large share of the engine's garbage on big mechanisms.
-const elementTotals = new Map<string, number>();
+// Atomic number, count, atomic number, count… per composition, read once. Balancing a large
+// text is then array arithmetic: walking each composition's keys (every species has its own
+// object shape) and summing in a Map per step were the slowest part of the check.
+const compositions = new WeakMap<Record<string, number>, Int32Array | number[]>();
 
-// Shared by every step whose elements balance (frozen: it is never filled in).
-const NO_IMBALANCE: Record<string, number> = Object.freeze({});
-
-// Symbol, count, symbol, count… per composition, read once: walking the composition objects
-// key by key (each species has its own shape) was the slowest part of balancing a large text.
-const elementLists = new WeakMap<Record<string, number>, readonly (string | number)[]>();
-
-function elementList(elements: Record<string, number>): readonly (string | number)[] {
-  let list = elementLists.get(elements);
-  if (!list) elementLists.set(elements, (list = Object.entries(elements).flat()));
+function compositionOf(elements: Record<string, number>): Int32Array | number[] {
+  let list = compositions.get(elements);
+  if (!list) {
+    const pairs: number[] = [];
+    for (const symbol of Object.keys(elements)) pairs.push(elementBySymbol(symbol)?.z ?? 0, elements[symbol]);
+    // Counts outside 32-bit integers (never in chemistry, but the type allows them) keep plain numbers.
+    list = pairs.every((value) => Number.isInteger(value) && Math.abs(value) < 2 ** 31) ? Int32Array.from(pairs) : pairs;
+    compositions.set(elements, list);
+  }
   return list;
 }
+
+// One scratch table for every step, indexed by atomic number (a step is balanced synchronously);
+// `touched` keeps the elements in order of first appearance and says which entries to reset.
+const totalsByZ = new Float64Array(ELEMENTS.length + 1);
+const touched: number[] = [];
 
 interface Totals {
   charge: number;
@@ -53,27 +59,40 @@ function accumulate(terms: readonly StepTerm[], sign: number, scale: number, tot
     // Whole numbers below 2^53 add exactly in floating point; the coefficients were scaled to whole numbers.
     const weight = scale === 1 ? sign * coef.toNumber() : sign * Number(coef.num) * (scale / Number(coef.den));
     if (species.opaque) totals.opaque = true;
-    const list = elementList(species.elements);
+    const list = compositionOf(species.elements);
     for (let index = 0; index < list.length; index += 2) {
-      const symbol = list[index] as string;
-      elementTotals.set(symbol, (elementTotals.get(symbol) ?? 0) + weight * (list[index + 1] as number));
+      const z = list[index];
+      if (!touched.includes(z)) touched.push(z);
+      totalsByZ[z] += weight * list[index + 1];
     }
     totals.charge += weight * species.charge;
     totals.sites += weight * species.sites;
   }
 }
 
+// Shared by every step whose elements balance (frozen: it is never filled in).
+const NO_IMBALANCE: Record<string, number> = Object.freeze({});
+
+/** The non-zero element totals, keyed by symbol; resets the scratch table. */
+function collectImbalance(scale: number, opaque: boolean): Record<string, number> | null {
+  let imbalance: Record<string, number> | null = null;
+  for (const z of touched) {
+    const total = totalsByZ[z];
+    totalsByZ[z] = 0;
+    // z 0 stands for a symbol missing from the periodic table; the formula reader reports those.
+    if (total !== 0 && !opaque && z > 0) (imbalance ??= {})[ELEMENTS[z - 1].symbol] = total / scale;
+  }
+  touched.length = 0;
+  return imbalance;
+}
+
 /** Element, charge and site balance of a step (exact: coefficients are scaled to whole numbers). */
 export function balanceOf(step: StepModel): StepBalance {
   const scale = denominatorLcm(step);
   const totals: Totals = { charge: 0, sites: 0, opaque: false };
-  elementTotals.clear();
   accumulate(step.reactants, -1, scale, totals);
   accumulate(step.products, 1, scale, totals);
-  let imbalance: Record<string, number> | null = null;
-  if (!totals.opaque) {
-    for (const [symbol, total] of elementTotals) if (total !== 0) (imbalance ??= {})[symbol] = total / scale;
-  }
+  const imbalance = collectImbalance(scale, totals.opaque);
   const chargeDelta = totals.charge / scale;
   const siteDelta = totals.sites / scale;
   const balanced = imbalance === null && chargeDelta === 0 && siteDelta === 0;

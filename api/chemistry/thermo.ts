@@ -44,37 +44,52 @@ export function reactionEnthalpy(
   terms: { key: string; coef: number }[],
   lookup: EnthalpyLookup,
 ): ReactionEnthalpy {
-  const net = new Map<string, number>();
+  const net: NetReaction = { keys: [], coefs: [] };
   for (const { key, coef } of terms) addToNet(net, key, coef);
   return netEnthalpy(net, lookup);
 }
 
+/**
+ * A net reaction as two parallel lists (species key, ν). A step or route has a handful of
+ * species, so a scan finds a key faster than a Map, and the lists can be reused step after step.
+ */
+export interface NetReaction {
+  keys: string[];
+  coefs: number[];
+}
+
 /** Adds ν of one term to a net reaction (photons and third bodies left out). */
-export function addToNet(net: Map<string, number>, key: string, coef: number): void {
+export function addToNet(net: NetReaction, key: string, coef: number): void {
   if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
   if (NOT_SPECIES.has(key)) return;
-  net.set(key, (net.get(key) ?? 0) + coef);
+  const index = net.keys.indexOf(key);
+  if (index < 0) {
+    net.keys.push(key);
+    net.coefs.push(coef);
+  } else net.coefs[index] += coef;
 }
 
 /** ΔH = Σ ν ΔfH° of a net reaction built with `addToNet`; species whose ν is 0 are not looked up. */
-export function netEnthalpy(net: ReadonlyMap<string, number>, lookup: EnthalpyLookup): ReactionEnthalpy {
+export function netEnthalpy(net: NetReaction, lookup: EnthalpyLookup): ReactionEnthalpy {
   let missing: string[] | null = null;
-  const used: EnthalpyEntry[] = [];
+  let used: EnthalpyEntry[] | null = null;
   let dH = 0;
   let variance: number | null = 0;
-  for (const [key, coef] of net) {
+  for (let index = 0; index < net.keys.length; index += 1) {
+    const key = net.keys[index];
+    const coef = net.coefs[index];
     if (Math.abs(coef) < 1e-12) continue;
     const entry = lookup(key);
     if (!entry) {
       (missing ??= []).push(key);
       continue;
     }
-    used.push(entry);
+    (used ??= []).push(entry);
     dH += coef * entry.dfH;
     variance = entry.uncertainty === null || variance === null ? null : variance + (coef * entry.uncertainty) ** 2;
   }
   // Copies sized to their content: a list grown by `push` keeps room for 16 entries, on every step of a large text.
-  const usedList = used.slice();
+  const usedList = used ? used.slice() : [];
   if (missing) return { dH: null, missing: missing.slice(), used: usedList, uncertainty: null };
   return { dH: roundNoise(dH), missing: NONE_MISSING, used: usedList, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
 }

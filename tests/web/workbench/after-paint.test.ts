@@ -8,8 +8,9 @@ const afterNextPaint = () => new Promise<void>((resolve) => requestAnimationFram
 function setup(initial: string) {
   const scope = effectScope();
   const source = ref(initial);
-  const shown = scope.run(() => useAfterPaint(source))!;
-  return { scope, source, shown };
+  const hold = ref(false);
+  const shown = scope.run(() => useAfterPaint(source, hold))!;
+  return { scope, source, hold, shown };
 }
 
 describe('useAfterPaint', () => {
@@ -41,6 +42,36 @@ describe('useAfterPaint', () => {
     await afterNextPaint();
     await afterNextPaint();
     expect(taken).toEqual(['c']);
+    scope.stop();
+  });
+
+  it('holds the value while a newer one is on its way (typing goes on), then passes on the newest', async () => {
+    const { scope, source, hold, shown } = setup('r1');
+    source.value = 'answer for the text before the key';
+    hold.value = true;
+    await nextTick();
+    await afterNextPaint();
+    await afterNextPaint();
+    expect(shown.value).toBe('r1');
+    source.value = 'answer for the text after the key';
+    hold.value = false;
+    await nextTick();
+    await afterNextPaint();
+    await afterNextPaint();
+    expect(shown.value).toBe('answer for the text after the key');
+    scope.stop();
+  });
+
+  it('passes on a value whose hold ends without a newer one (the text typed back to what was analysed)', async () => {
+    const { scope, source, hold, shown } = setup('r1');
+    hold.value = true;
+    source.value = 'r2';
+    await nextTick();
+    hold.value = false;
+    await nextTick();
+    await afterNextPaint();
+    await afterNextPaint();
+    expect(shown.value).toBe('r2');
     scope.stop();
   });
 

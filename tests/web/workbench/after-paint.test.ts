@@ -5,6 +5,13 @@ import { useAfterPaint } from '@web/composables/useAfterPaint';
 /** Resolves after the next frame has been painted (a task queued from a frame callback). */
 const afterNextPaint = () => new Promise<void>((resolve) => requestAnimationFrame(() => setTimeout(resolve)));
 
+/** Lets Vue's watchers run, then two frames paint: anything passed on by then has been. */
+async function painted(): Promise<void> {
+  await nextTick();
+  await afterNextPaint();
+  await afterNextPaint();
+}
+
 function setup(initial: string) {
   const scope = effectScope();
   const source = ref(initial);
@@ -25,8 +32,7 @@ describe('useAfterPaint', () => {
     source.value = 'after';
     await nextTick();
     expect(shown.value).toBe('before');
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(shown.value).toBe('after');
     scope.stop();
   });
@@ -39,8 +45,7 @@ describe('useAfterPaint', () => {
     await nextTick();
     source.value = 'c';
     await nextTick();
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(taken).toEqual(['c']);
     scope.stop();
   });
@@ -50,14 +55,12 @@ describe('useAfterPaint', () => {
     source.value = 'answer for the text before the key';
     hold.value = true;
     await nextTick();
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(shown.value).toBe('r1');
     source.value = 'answer for the text after the key';
     hold.value = false;
     await nextTick();
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(shown.value).toBe('answer for the text after the key');
     scope.stop();
   });
@@ -69,8 +72,7 @@ describe('useAfterPaint', () => {
     await nextTick();
     hold.value = false;
     await nextTick();
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(shown.value).toBe('r2');
     scope.stop();
   });
@@ -80,8 +82,7 @@ describe('useAfterPaint', () => {
     source.value = 'closing';
     await nextTick();
     scope.stop();
-    await afterNextPaint();
-    await afterNextPaint();
+    await painted();
     expect(shown.value).toBe('open');
   });
 });

@@ -10,28 +10,43 @@ export interface RegisteredSpecies extends SpeciesInfo {
   firstColumn: number;
 }
 
+/** Most spellings kept between analyses (a large mechanism has about one species per four steps). */
+const SHARED_RESOLUTIONS_MAX = 50_000;
+/**
+ * Resolutions of texts without `%species` declarations, kept between analyses: a spelling then
+ * always means the same species, and the workbench analyses nearly the same text on every pause
+ * in typing. Resolutions are never changed once made (the registry copies what it lists).
+ */
+const sharedResolutions = new Map<string, Resolution>();
+
+// Reserved particles are cached under keys no written species can have (`%` is not part of the notation's species).
+const RESERVED_CACHE_KEYS = { photon: '%photon', 'third-body': '%third-body', site: '%site', electron: '%electron' } as const;
+
 /**
  * Resolves written particles once per distinct spelling and keeps every species in order of
  * first appearance. Problems are reported at each place they occur.
  */
 export class SpeciesRegistry {
   readonly byKey = new Map<string, RegisteredSpecies>();
-  private readonly cache = new Map<string, Resolution>();
+  private readonly cache: Map<string, Resolution>;
 
   constructor(
     private readonly declarations: ReadonlyMap<string, DeclaredSpecies>,
     private readonly diagnostics: Diagnostic[],
-  ) {}
+  ) {
+    this.cache = declarations.size === 0 ? sharedResolutions : new Map();
+  }
 
   /**
    * The species for a written particle, or null (with diagnostics) when it cannot be read. It is
    * not listed yet: `register` does that once the whole step could be read.
    */
   resolve(node: ParticleNode): SpeciesInfo | null {
-    const text = node.kind === 'species' ? node.text : node.kind;
+    const text = node.kind === 'species' ? node.text : RESERVED_CACHE_KEYS[node.kind];
     let resolution = this.cache.get(text);
     if (!resolution) {
       resolution = resolveParticle(node, this.declarations);
+      if (this.cache.size >= SHARED_RESOLUTIONS_MAX) this.cache.clear();
       this.cache.set(text, resolution);
     }
     for (const problem of resolution.problems) {

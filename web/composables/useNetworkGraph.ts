@@ -1,7 +1,7 @@
 import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
 import type { Core, EventObject } from 'cytoscape';
 import type { NetworkModel } from '@web/components/workbench/network/networkModel';
-import { createNetworkCore, drawNetwork } from '@web/components/workbench/network/networkGraph';
+import { createNetworkCore, drawNetwork, updateNetworkData } from '@web/components/workbench/network/networkGraph';
 import { planLayout } from '@web/components/workbench/network/networkLayout';
 import { downloadBlob, graphToSvg } from '@web/components/workbench/network/networkSnapshot';
 
@@ -42,9 +42,7 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
       if (drawn && model.value !== next) await sync(model.value);
       return;
     }
-    instance.batch(() => {
-      for (const data of [...next.nodes, ...next.edges]) instance.getElementById(data.id).data({ ...data });
-    });
+    updateNetworkData(instance, next);
   }
 
   watch(container, (element) => {

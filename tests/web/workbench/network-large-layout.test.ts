@@ -6,7 +6,7 @@ import { analyseMechanism } from '@api/chemistry/analyse';
 import { generateMechanism } from '../../../examples/generate-large';
 import { largeGraphLayout, type LayoutGraph } from '@web/components/workbench/network/largeGraphLayout';
 import { LARGE_GRAPH_NODES, planLayout } from '@web/components/workbench/network/networkLayout';
-import { drawNetwork } from '@web/components/workbench/network/networkGraph';
+import { drawNetwork, updateNetworkData } from '@web/components/workbench/network/networkGraph';
 import { buildNetworkModel, type NetworkModel } from '@web/components/workbench/network/networkModel';
 import { networkStyle, networkStyleFor } from '@web/components/workbench/network/networkStyle';
 
@@ -93,6 +93,22 @@ describe('planLayout and drawNetwork', () => {
     const again = generatedModel(500);
     expect(planLayout(again)).toBe(planLayout(model));
     expect(planLayout(generatedModel(501))).not.toBe(planLayout(model));
+  });
+
+  it('touches only the elements whose data a new route changes', async () => {
+    const analysis = saltLake as unknown as MechanismAnalysis;
+    const cy = cytoscape({ headless: true, styleEnabled: true, style: networkStyle });
+    await drawNetwork(cy, small, null);
+    // The same analysis again (as after an edit that changed no step): nothing to restyle.
+    expect(updateNetworkData(cy, buildNetworkModel(analysis, { route: null, selectedStep: null }))).toBe(0);
+    const overall = buildNetworkModel(analysis, { route: analysis.overall, selectedStep: null });
+    const changed = updateNetworkData(cy, overall);
+    expect(changed).toBeGreaterThan(0);
+    expect(changed).toBeLessThanOrEqual(overall.nodes.length + overall.edges.length);
+    // B1 runs three times in the overall route of the example's golden analysis (3 B1 + B2 + B3 + B4).
+    expect(cy.getElementById('r:B1').data()).toMatchObject({ inRoute: true, sigma: 3 });
+    expect(updateNetworkData(cy, overall)).toBe(0);
+    cy.destroy();
   });
 
   it('changes nothing when a newer model came while the layout ran', async () => {

@@ -38,3 +38,22 @@ export async function drawNetwork(cy: Core, model: NetworkModel, planned = planL
   cy.fit(undefined, 24);
   return true;
 }
+
+/**
+ * Gives the elements the model's data (a new route, selection or fluxes; the structure is the same)
+ * and returns how many changed. Only elements whose data differ are touched: each touched element is
+ * styled and drawn again, and a new analysis of an unchanged mechanism would otherwise restyle
+ * thousands of them.
+ */
+export function updateNetworkData(cy: Core, model: NetworkModel): number {
+  let changed = 0;
+  cy.batch(() => {
+    for (const data of [...model.nodes, ...model.edges]) {
+      const element = cy.getElementById(data.id);
+      if (Object.entries(data).every(([key, value]) => element.data(key) === value)) continue;
+      element.data({ ...data });
+      changed += 1;
+    }
+  });
+  return changed;
+}

@@ -2,6 +2,7 @@ import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
 import { parseMechanism } from '@grammar/parse';
 import { analyseMechanism } from '@api/chemistry/analyse';
+import { forgetSharedResolutions } from '@api/chemistry/species-registry';
 import { generateMechanism } from '../../examples/generate-large';
 import type { BenchRow, BenchSuite } from './types';
 
@@ -32,17 +33,29 @@ function prestructured(text: string): string {
   return JSON.stringify(steps);
 }
 
+/** Heap the result of analysing `text` holds (analysed once more and kept until measured). */
+function heldByResult(text: string): number {
+  collect();
+  const heapBefore = process.memoryUsage().heapUsed;
+  const result = analyseMechanism(text);
+  collect();
+  const held = (process.memoryUsage().heapUsed - heapBefore) / 2 ** 20;
+  return result ? held : 0;
+}
+
 function sizeRows(steps: number): BenchRow[] {
   const text = generateMechanism(steps);
   const json = prestructured(text);
   collect();
   const floor = timed(() => JSON.parse(json) as unknown[]);
   analyseMechanism(text); // warm: the server analyses many texts, so the compiled code is what counts
+  forgetSharedResolutions(); // …but every spelling is new to it, as in a text never seen before
   collect();
-  const heapBefore = process.memoryUsage().heapUsed;
-  const run = timed(() => analyseMechanism(text));
+  // Only the figures are kept, so that no earlier result weighs on the next measurement.
+  const run = timed(() => analyseMechanism(text) !== null);
+  const heldMb = heldByResult(text);
   collect();
-  const heldMb = (process.memoryUsage().heapUsed - heapBefore) / 2 ** 20;
+  const again = timed(() => analyseMechanism(text) !== null); // the workbench's case: the same spellings once more
   const group = 'engine';
   const name = `${steps} steps`;
   const floorRow = { name: 'JSON.parse of the same steps', value: floor.ms, unit: 'ms' };
@@ -52,6 +65,7 @@ function sizeRows(steps: number): BenchRow[] {
     { group, name: `${name}: check time (CPU)`, value: run.cpuMs, unit: 'ms', baseline: { ...floorRow, value: floor.cpuMs } },
     { group, name: `${name}: steps/s (wall)`, value: (steps / run.ms) * 1000, unit: 'steps/s', baseline: floorRate, target: '≥ 50000 steps/s' },
     { group, name: `${name}: steps/s (CPU)`, value: (steps / run.cpuMs) * 1000, unit: 'steps/s', target: '≥ 50000 steps/s' },
+    { group, name: `${name}: same text again (wall)`, value: again.ms, unit: 'ms', baseline: floorRow },
     { group, name: `${name}: heap held by the result`, value: heldMb, unit: 'MB' },
     { group, name: `${name}: peak RSS of the process so far`, value: process.resourceUsage().maxRSS / 1024, unit: 'MB' },
   ];

@@ -19,6 +19,11 @@ const SHARED_RESOLUTIONS_MAX = 50_000;
  */
 const sharedResolutions = new Map<string, Resolution>();
 
+/** Forgets the kept resolutions (the bench measures a text whose spellings are all new). */
+export function forgetSharedResolutions(): void {
+  sharedResolutions.clear();
+}
+
 // Reserved particles are cached under keys no written species can have (`%` is not part of the notation's species).
 const RESERVED_CACHE_KEYS = { photon: '%photon', 'third-body': '%third-body', site: '%site', electron: '%electron' } as const;
 

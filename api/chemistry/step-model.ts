@@ -7,10 +7,10 @@ import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 
 /** One species on one side of a step, with equal terms merged (`A + A` is `2 A`). */
 export interface StepTerm {
-  species: RegisteredSpecies;
-  coef: Fraction;
+  readonly species: RegisteredSpecies;
+  readonly coef: Fraction;
   /** The species key again, so that a term can be shown as it is (equation-format.ts). */
-  key: string;
+  readonly key: string;
 }
 
 /**
@@ -75,6 +75,19 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
   return readable ? read : null;
 }
 
+// Steps share their terms: the same species with the same coefficient object (coefficients are
+// read once per spelling) is one frozen term in every step of a text, which keeps the steps of a
+// large mechanism, held until the whole text is analysed, small for the collector.
+const sharedTerms = new WeakMap<RegisteredSpecies, Map<Fraction, StepTerm>>();
+
+function sharedTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
+  let byCoef = sharedTerms.get(species);
+  if (!byCoef) sharedTerms.set(species, (byCoef = new Map()));
+  let term = byCoef.get(coef);
+  if (!term) byCoef.set(coef, (term = Object.freeze({ species, coef, key: species.key })));
+  return term;
+}
+
 /**
  * Lists the species of a readable side and merges equal terms (`A + A` is `2 A`). A side has a
  * handful of terms, so a scan is cheaper than a map per side.
@@ -82,9 +95,9 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
 function mergeSide(terms: readonly ReadTerm[], registry: SpeciesRegistry): StepTerm[] {
   const merged: StepTerm[] = [];
   for (const { species, coef, node } of terms) {
-    const known = merged.find((term) => term.key === species.key);
-    if (known) known.coef = known.coef.add(coef);
-    else merged.push({ species: registry.register(species, node.particle), coef, key: species.key });
+    const index = merged.findIndex((term) => term.key === species.key);
+    if (index >= 0) merged[index] = sharedTerm(merged[index].species, merged[index].coef.add(coef));
+    else merged.push(sharedTerm(registry.register(species, node.particle), coef));
   }
   return merged;
 }

@@ -5,22 +5,19 @@ import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
 import { equationText, type ShownTerm } from './equation-format';
 import { balanceOf, type StepBalance } from './step-balance';
-import type { Fraction } from './fraction';
 import type { StepModel, StepTerm } from './step-model';
 import { checkStepRules, isElementary, molecularity, reportClass } from './step-rules';
 import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
-// The same species with the same coefficient recurs on many steps: one frozen term object each
-// (per species record, so the table goes with the analysis) keeps a large result small.
-const sharedTerms = new WeakMap<object, Map<Fraction, TermJson>>();
+// Steps share their terms (step-model.ts), so the JSON of a term is made once and shared too:
+// the same species with the same coefficient recurs on many steps of a large result.
+const termsAsJson = new WeakMap<StepTerm, TermJson>();
 
 function termJson(term: StepTerm): TermJson {
-  let byCoef = sharedTerms.get(term.species);
-  if (!byCoef) sharedTerms.set(term.species, (byCoef = new Map()));
-  let json = byCoef.get(term.coef);
-  if (!json) byCoef.set(term.coef, (json = Object.freeze({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() })));
+  let json = termsAsJson.get(term);
+  if (!json) termsAsJson.set(term, (json = Object.freeze({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() })));
   return json;
 }
 

@@ -16,11 +16,14 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
   const status = ref<'loading' | 'ready' | 'error'>('loading');
   const hovered = ref<{ label: string; role: string | null } | null>(null);
   let structure = '';
+  /** The panel has closed: a graph still being built is dropped. */
+  let closed = false;
 
   async function create(element: HTMLElement): Promise<void> {
     // A large graph's layout starts in its worker while cytoscape is fetched.
     const planned = planLayout(model.value);
     const instance = await createNetworkCore(element, model.value.nodes.length);
+    if (closed) return void instance.destroy();
     instance.on('tap', 'node[kind = "step"]', (event: EventObject) => onStepClick(String(event.target.data('step'))));
     instance.on('mouseover', 'node', (event: EventObject) => {
       hovered.value = { label: String(event.target.data('key') ?? event.target.data('step')), role: event.target.data('role') ?? null };
@@ -37,7 +40,8 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
     const nextStructure = structureOf(next);
     if (nextStructure !== structure) {
       structure = nextStructure;
-      const drawn = await drawNetwork(instance, next, planned, () => structure === nextStructure);
+      // The panel may have closed (and its graph been destroyed) while the layout ran.
+      const drawn = await drawNetwork(instance, next, planned, () => structure === nextStructure && !instance.destroyed());
       // A route or selection chosen while the layout ran was not in the elements just added.
       if (drawn && model.value !== next) await sync(model.value);
       return;
@@ -49,7 +53,10 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
     if (element && !cy.value) create(element).catch(() => (status.value = 'error'));
   }, { immediate: true });
   watch(model, (next) => void sync(next));
-  onBeforeUnmount(() => cy.value?.destroy());
+  onBeforeUnmount(() => {
+    closed = true;
+    cy.value?.destroy();
+  });
 
   async function exportPng(fileName: string): Promise<void> {
     const blob = await cy.value?.png({ output: 'blob-promise', full: true, scale: 2, bg: '#ffffff' });

@@ -22,6 +22,8 @@ export class Fraction {
   // its number and text are computed once (private fields stay out of equality checks).
   #number: number | undefined;
   #text: string | undefined;
+  // Comparing BigInts is a call into the runtime; the per-step checks ask "whole?" of every term.
+  #whole: boolean | undefined;
 
   constructor(num: bigint, den: bigint = 1n) {
     if (den === 0n) throw new RangeError('Fraction: zero denominator');
@@ -76,7 +78,8 @@ export class Fraction {
   }
 
   isInteger(): boolean {
-    return this.den === 1n;
+    if (this.#whole === undefined) this.#whole = this.den === 1n;
+    return this.#whole;
   }
 
   sign(): number {
@@ -84,7 +87,7 @@ export class Fraction {
   }
 
   equals(other: Fraction): boolean {
-    return this.num === other.num && this.den === other.den;
+    return this === other || (this.num === other.num && this.den === other.den);
   }
 
   toNumber(): number {

@@ -16,7 +16,7 @@ run_step() {
 
 run_step type-check npx vue-tsc --noEmit -p tsconfig.json
 run_step lint npx eslint . --max-warnings=0
-run_step build npx vite build --logLevel warn
+run_step build env NODE_ENV=production npx vite build --logLevel warn
 run_step unit+api npx vitest run --project node --project web --reporter=default --reporter=json --outputFile.json=test-output/vitest-main.json
 run_step e2e npx vitest run --project e2e --reporter=default --reporter=json --outputFile.json=test-output/vitest-e2e.json
 # Last: this suite stops and restarts the test cluster, so nothing may run beside it.

@@ -3,11 +3,24 @@ import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { resolveParticle, type DeclaredSpecies, type Resolution } from './species-resolve';
 import type { SpeciesInfo } from './species-model';
+import { compositionList, type CompositionList } from './species-composition';
+import type { Fraction } from './fraction';
+import type { StepTerm } from './step-model';
 
-/** A species met in the mechanism, with where it was first written. */
+/**
+ * A species met in the mechanism, with where it was first written. The last three fields belong
+ * to this analysis only and are read on every step of a large text, so they sit on the record
+ * itself rather than in lookup tables.
+ */
 export interface RegisteredSpecies extends SpeciesInfo {
   firstLine: number;
   firstColumn: number;
+  /** Position in the list of species (order of first appearance). */
+  order: number;
+  /** The elements as (atomic number, count) pairs, for the balance. */
+  composition: CompositionList;
+  /** The step terms of this species, one per coefficient (step-model.ts shares them between steps). */
+  terms: Map<Fraction, StepTerm>;
 }
 
 /** Most spellings kept between analyses (a large mechanism has about one species per four steps). */
@@ -65,7 +78,7 @@ export class SpeciesRegistry {
   register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
     const known = this.byKey.get(info.key);
     if (known) return known;
-    const registered = { ...info, firstLine: node.line, firstColumn: node.column };
+    const registered = { ...info, firstLine: node.line, firstColumn: node.column, order: this.byKey.size, composition: compositionList(info.elements), terms: new Map() };
     this.byKey.set(info.key, registered);
     return registered;
   }

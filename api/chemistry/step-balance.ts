@@ -1,4 +1,4 @@
-import { ELEMENTS, elementBySymbol } from './elements';
+import { ELEMENTS } from './elements';
 import type { StepModel, StepTerm } from './step-model';
 
 /** Conservation of elements, charge and sites in one step (products − reactants). */
@@ -26,23 +26,6 @@ function denominatorLcm(step: StepModel): number {
   return common;
 }
 
-// Atomic number, count, atomic number, count… per composition, read once. Balancing a large
-// text is then array arithmetic: walking each composition's keys (every species has its own
-// object shape) and summing in a Map per step were the slowest part of the check.
-const compositions = new WeakMap<Record<string, number>, Int32Array | number[]>();
-
-function compositionOf(elements: Record<string, number>): Int32Array | number[] {
-  let list = compositions.get(elements);
-  if (!list) {
-    const pairs: number[] = [];
-    for (const symbol of Object.keys(elements)) pairs.push(elementBySymbol(symbol)?.z ?? 0, elements[symbol]);
-    // Counts outside 32-bit integers (never in chemistry, but the type allows them) keep plain numbers.
-    list = pairs.every((value) => Number.isInteger(value) && Math.abs(value) < 2 ** 31) ? Int32Array.from(pairs) : pairs;
-    compositions.set(elements, list);
-  }
-  return list;
-}
-
 // One scratch table for every step, indexed by atomic number (a step is balanced synchronously);
 // `touched` keeps the elements in order of first appearance and says which entries to reset.
 const totalsByZ = new Float64Array(ELEMENTS.length + 1);
@@ -59,7 +42,7 @@ function accumulate(terms: readonly StepTerm[], sign: number, scale: number, tot
     // Whole numbers below 2^53 add exactly in floating point; the coefficients were scaled to whole numbers.
     const weight = scale === 1 ? sign * coef.toNumber() : sign * Number(coef.num) * (scale / Number(coef.den));
     if (species.opaque) totals.opaque = true;
-    const list = compositionOf(species.elements);
+    const list = species.composition;
     for (let index = 0; index < list.length; index += 2) {
       const z = list[index];
       if (!touched.includes(z)) touched.push(z);

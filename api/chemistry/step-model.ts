@@ -1,3 +1,4 @@
+import type { TermJson } from './analysis-types';
 import type { RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
@@ -11,6 +12,8 @@ export interface StepTerm {
   readonly coef: Fraction;
   /** The species key again, so that a term can be shown as it is (equation-format.ts). */
   readonly key: string;
+  /** The term as the analysis reports it, made once with the shared term. */
+  readonly json: TermJson;
 }
 
 /**
@@ -78,13 +81,12 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
 // Steps share their terms: the same species with the same coefficient object (coefficients are
 // read once per spelling) is one frozen term in every step of a text, which keeps the steps of a
 // large mechanism, held until the whole text is analysed, small for the collector.
-const sharedTerms = new WeakMap<RegisteredSpecies, Map<Fraction, StepTerm>>();
-
 function sharedTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
-  let byCoef = sharedTerms.get(species);
-  if (!byCoef) sharedTerms.set(species, (byCoef = new Map()));
-  let term = byCoef.get(coef);
-  if (!term) byCoef.set(coef, (term = Object.freeze({ species, coef, key: species.key })));
+  let term = species.terms.get(coef);
+  if (!term) {
+    const json = Object.freeze({ key: species.key, coef: coef.toNumber(), coefText: coef.toString() });
+    species.terms.set(coef, (term = Object.freeze({ species, coef, key: species.key, json })));
+  }
   return term;
 }
 

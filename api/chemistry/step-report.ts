@@ -11,18 +11,9 @@ import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
-// Steps share their terms (step-model.ts), so the JSON of a term is made once and shared too:
-// the same species with the same coefficient recurs on many steps of a large result.
-const termsAsJson = new WeakMap<StepTerm, TermJson>();
-
-function termJson(term: StepTerm): TermJson {
-  let json = termsAsJson.get(term);
-  if (!json) termsAsJson.set(term, (json = Object.freeze({ key: term.key, coef: term.coef.toNumber(), coefText: term.coef.toString() })));
-  return json;
-}
-
-// `map` sizes the list exactly; a list grown by `push` keeps room for 16 terms on every step.
-const termsJson = (terms: readonly StepTerm[]): TermJson[] => terms.map(termJson);
+// Shared terms carry their JSON (step-model.ts); `map` sizes the list exactly, where a list grown by
+// `push` keeps room for 16 terms on every step.
+const termsJson = (terms: readonly StepTerm[]): TermJson[] => terms.map((term) => term.json);
 
 function signed(value: number): string {
   return value > 0 ? `+${value}` : String(value);

@@ -93,6 +93,7 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     thresholdNm: enthalpy.thresholdNm,
     missingEnthalpies: enthalpy.missing,
     usedEnthalpies: enthalpy.used,
-    rate: source.rate ? { forward: source.rate.forward, reverse: source.rate.reverse, line: source.rate.line, column: source.rate.column } : null,
+    // The rate as the parser read it ({ forward, reverse, line, column }): nothing changes it, so it is not copied.
+    rate: source.rate,
   };
 }

@@ -1,13 +1,7 @@
 import type { Knex } from 'knex';
 import type { EnthalpyLookup } from '../chemistry/thermo';
+import { version as catalogueVersion } from './catalogue.queries';
 import { catalogueLookup } from './catalogue.service';
-
-/** The catalogue's change counter; a trigger adds one with every write (migration 20261202000710). */
-async function catalogueVersion(db: Knex): Promise<string> {
-  const row = await db('catalogue_version').first('version');
-  if (!row) throw new Error('catalogue_version has no row: run the migrations');
-  return String(row.version);
-}
 
 interface CachedLookup {
   version: string;

@@ -44,6 +44,13 @@ export async function search(db: Db, text: string | undefined): Promise<Catalogu
   return query.orderBy('name').orderBy('id');
 }
 
+/** The catalogue's change counter; a trigger adds one with every write (migration 20261202000710). */
+export async function version(db: Db): Promise<string> {
+  const row = await db('catalogue_version').first('version');
+  if (!row) throw new Error('catalogue_version has no row: run the migrations');
+  return String(row.version);
+}
+
 export async function withEnthalpy(db: Db): Promise<CatalogueRow[]> {
   return db('species_catalogue').whereNotNull('dfh').select(COLUMNS).orderBy('id');
 }

@@ -37,7 +37,9 @@ import moo from 'moo';
 const NAME_END = '(?![A-Za-z0-9_])';
 
 // Single-character literals come first: moo matches them by table lookup, before its regex.
-// `(` stays in the regex because a state tag such as `(3P)` also starts with it.
+// `(` stays in the regex because a state tag such as `(3P)` also starts with it. Blanks are
+// literals too, one token per character: a regex match would build a result array for each of
+// the half of a line's tokens that are blanks, and the wrapper below drops them all anyway.
 const baseLexer = moo.states({
   main: {
     colon: ':',
@@ -50,7 +52,7 @@ const baseLexer = moo.states({
     equals: '=',
     radical: ['•', '.'],
     at: { match: '@', next: 'rate' },
-    ws: /[ \t]+/,
+    ws: [' ', '\t'],
     label: /[A-Za-z][A-Za-z0-9_.\-]*(?=[ \t]*:)/,
     photon: /hν|hv(?![A-Za-z0-9_])/,
     electron: /e\^-/,
@@ -82,7 +84,7 @@ const baseLexer = moo.states({
   assign: {
     equals: '=',
     comma: ',',
-    ws: /[ \t]+/,
+    ws: [' ', '\t'],
     value: /[^,=#\n]+/,
     comment: /#.*/,
     invalid: moo.error,

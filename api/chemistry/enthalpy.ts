@@ -1,7 +1,7 @@
 import type { Fraction } from './fraction';
 import type { StepModel } from './step-model';
 import { roundNoise } from './thermo-lookup';
-import { addToNet, netEnthalpy, reactionEnthalpy, type NetReaction, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
+import { addToNet, clearNet, netEnthalpy, newNetReaction, reactionEnthalpy, type NetReaction, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
 
 /** A lookup that asks the underlying table once per key. */
 export function cachedLookup(lookup: EnthalpyLookup): EnthalpyLookup {
@@ -26,8 +26,7 @@ export interface StepEnthalpy {
 /** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
   const net = stepNet;
-  net.keys.length = 0;
-  net.coefs.length = 0;
+  clearNet(net);
   let photolysis = false;
   for (const term of step.reactants) {
     addToNet(net, term.key, -term.coef.toNumber());
@@ -40,7 +39,7 @@ export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEntha
 
 // One scratch net reaction for every step (a step is computed synchronously, and a table per step
 // was garbage the collector had to sweep on large mechanisms).
-const stepNet: NetReaction = { keys: [], coefs: [] };
+const stepNet: NetReaction = newNetReaction();
 
 export interface RouteEnthalpy {
   /** Σ σ ΔH(step) when every step's ΔH is known, else ΔH of the net reaction. */

@@ -1,5 +1,5 @@
-import { flatText } from './flat-text';
 import { Fraction } from './fraction';
+import { ScratchList } from './scratch-list';
 
 const ONE = Fraction.ONE;
 
@@ -9,25 +9,55 @@ export interface ShownTerm {
   coef: Fraction;
 }
 
-function termText(term: ShownTerm, explicit: boolean): string {
-  return explicit || !term.coef.equals(ONE) ? `${term.coef.toString()} ${term.key}` : term.key;
+// The pieces of the equation being written, joined once into a flat string (see flat-text.ts): an
+// equation is written for every step of a large text, so pieces are not first joined per term or
+// per side. Equations are written synchronously, one at a time.
+const pieces = new ScratchList<string>();
+
+function addTerm(term: ShownTerm, explicit: boolean): void {
+  if (explicit || !term.coef.equals(ONE)) {
+    pieces.push(term.coef.toString());
+    pieces.push(' ');
+  }
+  pieces.push(term.key);
 }
 
-/** `2 Br• + O2` (coefficient 1 left out). */
-export function sideText(terms: readonly ShownTerm[]): string {
-  return terms.map((term) => termText(term, false)).join(' + ');
+function addSide(terms: readonly ShownTerm[], explicit: boolean, count = terms.length): void {
+  for (let index = 0; index < count; index += 1) {
+    if (index > 0) pieces.push(' + ');
+    addTerm(terms[index], explicit);
+  }
+}
+
+function written(): string {
+  const text = pieces.copy().join('');
+  pieces.clear();
+  return text;
 }
 
 /** The display form of a step or net reaction: `Br• + O3 → BrO• + O2`, `⇌` when reversible. */
 export function equationText(reactants: readonly ShownTerm[], products: readonly ShownTerm[], reversible = false): string {
-  return flatText(sideText(reactants), reversible ? ' ⇌ ' : ' → ', sideText(products));
+  addSide(reactants, false);
+  pieces.push(reversible ? ' ⇌ ' : ' → ');
+  addSide(products, false);
+  return written();
 }
 
-function sortedSide(terms: readonly ShownTerm[]): string {
-  return [...terms]
-    .sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0))
-    .map((term) => termText(term, true))
-    .join(' + ');
+// A side has a handful of terms: an insertion sort into a reused list spares the copy and the
+// work arrays of `Array.prototype.sort` on every step.
+const sorted: ShownTerm[] = [];
+
+function addSortedSide(terms: readonly ShownTerm[]): void {
+  for (let count = 0; count < terms.length; count += 1) {
+    const term = terms[count];
+    let index = count;
+    while (index > 0 && sorted[index - 1].key > term.key) {
+      sorted[index] = sorted[index - 1];
+      index -= 1;
+    }
+    sorted[index] = term;
+  }
+  addSide(sorted, true, terms.length);
 }
 
 /**
@@ -35,5 +65,8 @@ function sortedSide(terms: readonly ShownTerm[]): string {
  * side, every coefficient explicit, ASCII arrows (`1 Br• + 1 O3 -> 1 BrO• + 1 O2`).
  */
 export function normalisedText(reactants: readonly ShownTerm[], products: readonly ShownTerm[], reversible: boolean): string {
-  return flatText(sortedSide(reactants), reversible ? ' <=> ' : ' -> ', sortedSide(products));
+  addSortedSide(reactants);
+  pieces.push(reversible ? ' <=> ' : ' -> ');
+  addSortedSide(products);
+  return written();
 }

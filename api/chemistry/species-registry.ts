@@ -19,8 +19,10 @@ export interface RegisteredSpecies extends SpeciesInfo {
   order: number;
   /** The elements as (atomic number, count) pairs, for the balance. */
   composition: CompositionList;
-  /** The step terms of this species, one per coefficient (step-model.ts shares them between steps). */
+  /** The step terms of this species, one per coefficient (step-model.ts shares them between steps)… */
   terms: Map<Fraction, StepTerm>;
+  /** …except the term without a coefficient, the commonest, kept here. */
+  unitTerm: StepTerm | null;
 }
 
 /** Most spellings kept between analyses (a large mechanism has about one species per four steps). */
@@ -78,7 +80,15 @@ export class SpeciesRegistry {
   register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
     const known = this.byKey.get(info.key);
     if (known) return known;
-    const registered = { ...info, firstLine: node.line, firstColumn: node.column, order: this.byKey.size, composition: compositionList(info.elements), terms: new Map() };
+    const registered: RegisteredSpecies = {
+      ...info,
+      firstLine: node.line,
+      firstColumn: node.column,
+      order: this.byKey.size,
+      composition: compositionList(info.elements),
+      terms: new Map(),
+      unitTerm: null,
+    };
     this.byKey.set(info.key, registered);
     return registered;
   }

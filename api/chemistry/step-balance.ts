@@ -1,5 +1,6 @@
 import { ELEMENTS } from './elements';
-import type { StepModel, StepTerm } from './step-model';
+import { ScratchList } from './scratch-list';
+import { termsOf, type StepModel, type StepTerm } from './step-model';
 
 /** Conservation of elements, charge and sites in one step (products − reactants). */
 export interface StepBalance {
@@ -14,8 +15,9 @@ export interface StepBalance {
 
 /** Least common multiple of the coefficient denominators, so that sums stay whole numbers (1 when all are whole). */
 function denominatorLcm(step: StepModel): number {
+  if (step.wholeCoefficients) return 1;
   let common = 1;
-  for (const term of step.terms) {
+  for (const term of termsOf(step)) {
     if (term.coef.isInteger()) continue;
     const den = Number(term.coef.den);
     let a = common;
@@ -29,7 +31,12 @@ function denominatorLcm(step: StepModel): number {
 // One scratch table for every step, indexed by atomic number (a step is balanced synchronously);
 // `touched` keeps the elements in order of first appearance and says which entries to reset.
 const totalsByZ = new Float64Array(ELEMENTS.length + 1);
-const touched: number[] = [];
+const touched = new ScratchList<number>();
+
+function touchedHas(z: number): boolean {
+  for (let index = 0; index < touched.size; index += 1) if (touched.at(index) === z) return true;
+  return false;
+}
 
 interface Totals {
   charge: number;
@@ -45,7 +52,7 @@ function accumulate(terms: readonly StepTerm[], sign: number, scale: number, tot
     const list = species.composition;
     for (let index = 0; index < list.length; index += 2) {
       const z = list[index];
-      if (!touched.includes(z)) touched.push(z);
+      if (!touchedHas(z)) touched.push(z);
       totalsByZ[z] += weight * list[index + 1];
     }
     totals.charge += weight * species.charge;
@@ -59,13 +66,14 @@ const NO_IMBALANCE: Record<string, number> = Object.freeze({});
 /** The non-zero element totals, keyed by symbol; resets the scratch table. */
 function collectImbalance(scale: number, opaque: boolean): Record<string, number> | null {
   let imbalance: Record<string, number> | null = null;
-  for (const z of touched) {
+  for (let index = 0; index < touched.size; index += 1) {
+    const z = touched.at(index);
     const total = totalsByZ[z];
     totalsByZ[z] = 0;
     // z 0 stands for a symbol missing from the periodic table; the formula reader reports those.
     if (total !== 0 && !opaque && z > 0) (imbalance ??= {})[ELEMENTS[z - 1].symbol] = total / scale;
   }
-  touched.length = 0;
+  touched.clear();
   return imbalance;
 }
 

@@ -1,8 +1,9 @@
 import type { TermJson } from './analysis-types';
-import type { RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
+import type { ParticleNode, RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { Fraction } from './fraction';
+import { ScratchList } from './scratch-list';
 import type { SpeciesInfo } from './species-model';
 import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 
@@ -40,8 +41,13 @@ export interface StepModel {
   reversible: boolean;
   reactants: StepTerm[];
   products: StepTerm[];
-  /** Reactants then products, for checks that look at every term. */
-  terms: StepTerm[];
+  /** Every coefficient is a whole number (read once here; balance and the step rules ask for it). */
+  wholeCoefficients: boolean;
+}
+
+/** Reactants then products, for the few checks that look at every term of one step. */
+export function termsOf(step: StepModel): StepTerm[] {
+  return step.reactants.concat(step.products);
 }
 
 const coefficientCache = new Map<string, Fraction | null>();
@@ -56,14 +62,14 @@ function readCoefficient(text: string): Fraction | null {
   return value;
 }
 
-interface ReadTerm {
-  species: SpeciesInfo;
-  coef: Fraction;
-  node: TermNode;
-}
+// The terms of the step being built, both sides, read before any is listed (a step is built
+// synchronously, one at a time): reused lists instead of an object per term.
+const readSpecies = new ScratchList<SpeciesInfo>();
+const readCoefs = new ScratchList<Fraction>();
+const readParticles = new ScratchList<ParticleNode>();
 
-function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnostics: Diagnostic[]): ReadTerm[] | null {
-  const read: ReadTerm[] = [];
+/** Reads one side into the lists above; false (with diagnostics) when a term cannot be read. */
+function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnostics: Diagnostic[]): boolean {
   let readable = true;
   for (const term of terms) {
     const species = registry.resolve(term.particle);
@@ -73,35 +79,62 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
       diagnostics.push(finding('bad-count', term.coefficient, message, { found: term.coefficient.text }));
     }
     if (!species || !coef) readable = false;
-    else read.push({ species, coef, node: term });
+    else {
+      readSpecies.push(species);
+      readCoefs.push(coef);
+      readParticles.push(term.particle);
+    }
   }
-  return readable ? read : null;
+  return readable;
+}
+
+function forgetRead(): void {
+  readSpecies.clear();
+  readCoefs.clear();
+  readParticles.clear();
 }
 
 // Steps share their terms: the same species with the same coefficient object (coefficients are
 // read once per spelling) is one frozen term in every step of a text, which keeps the steps of a
 // large mechanism, held until the whole text is analysed, small for the collector.
+// A term written without a coefficient (most of them) is kept on the species itself, which spares
+// the lookup in the species' table of terms.
 function sharedTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
+  if (coef === Fraction.ONE) return (species.unitTerm ??= newTerm(species, coef));
   let term = species.terms.get(coef);
-  if (!term) {
-    const json = Object.freeze({ key: species.key, coef: coef.toNumber(), coefText: coef.toString() });
-    species.terms.set(coef, (term = Object.freeze({ species, coef, key: species.key, json })));
-  }
+  if (!term) species.terms.set(coef, (term = newTerm(species, coef)));
   return term;
 }
 
+function newTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
+  const json = Object.freeze({ key: species.key, coef: coef.toNumber(), coefText: coef.toString() });
+  return Object.freeze({ species, coef, key: species.key, json });
+}
+
+function allWhole(terms: readonly StepTerm[]): boolean {
+  for (const term of terms) if (!term.coef.isInteger()) return false;
+  return true;
+}
+
+// The merged terms of one side, copied out at their exact size (a list grown by `push` keeps
+// room for 16 terms, and the steps of a large text are all held until the end).
+const merged = new ScratchList<StepTerm>();
+
 /**
- * Lists the species of a readable side and merges equal terms (`A + A` is `2 A`). A side has a
- * handful of terms, so a scan is cheaper than a map per side.
+ * Lists the species of the read terms from..to and merges equal terms (`A + A` is `2 A`). A side
+ * has a handful of terms, so a scan is cheaper than a map per side.
  */
-function mergeSide(terms: readonly ReadTerm[], registry: SpeciesRegistry): StepTerm[] {
-  const merged: StepTerm[] = [];
-  for (const { species, coef, node } of terms) {
-    const index = merged.findIndex((term) => term.key === species.key);
-    if (index >= 0) merged[index] = sharedTerm(merged[index].species, merged[index].coef.add(coef));
-    else merged.push(sharedTerm(registry.register(species, node.particle), coef));
+function mergeSide(from: number, to: number, registry: SpeciesRegistry): StepTerm[] {
+  merged.clear();
+  for (let read = from; read < to; read += 1) {
+    const species = readSpecies.at(read);
+    const coef = readCoefs.at(read);
+    let index = merged.size - 1;
+    while (index >= 0 && merged.at(index).key !== species.key) index -= 1;
+    if (index >= 0) merged.items[index] = sharedTerm(merged.at(index).species, merged.at(index).coef.add(coef));
+    else merged.push(sharedTerm(registry.register(species, readParticles.at(read)), coef));
   }
-  return merged;
+  return merged.copy();
 }
 
 function findPhoton(terms: readonly TermNode[]) {
@@ -111,16 +144,20 @@ function findPhoton(terms: readonly TermNode[]) {
 
 /** Builds the step model, or null (with diagnostics) when a species or coefficient cannot be read. */
 export function buildStep(node: StepNode, position: number, registry: SpeciesRegistry, diagnostics: Diagnostic[]): StepModel | null {
+  forgetRead();
   const left = readSide(node.reactants, registry, diagnostics);
+  const split = readSpecies.size;
   const right = readSide(node.products, registry, diagnostics);
   if (!left || !right) return null;
-  const reactants = mergeSide(left, registry);
-  const products = mergeSide(right, registry);
+  const reactants = mergeSide(0, split, registry);
+  const products = mergeSide(split, readSpecies.size, registry);
+  forgetRead();
   const label = node.label?.text ?? null;
   const photon = findPhoton(node.products);
   const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;
   const source = { line: node.line, column: node.column, label: node.label, rate: node.rate, productPhoton };
-  return { index: -1, id: label ?? `#${position}`, label, source, reversible: node.reversible, reactants, products, terms: [...reactants, ...products] };
+  const wholeCoefficients = allWhole(reactants) && allWhole(products);
+  return { index: -1, id: label ?? `#${position}`, label, source, reversible: node.reversible, reactants, products, wholeCoefficients };
 }
 
 /** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */

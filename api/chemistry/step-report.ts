@@ -5,7 +5,7 @@ import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
 import { equationText, type ShownTerm } from './equation-format';
 import { balanceOf, type StepBalance } from './step-balance';
-import type { StepModel, StepTerm } from './step-model';
+import { termsOf, type StepModel, type StepTerm } from './step-model';
 import { checkStepRules, isElementary, molecularity, reportClass } from './step-rules';
 import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
@@ -51,9 +51,9 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
   diagnostics.push(finding('suggested-fix', step.source, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }
 
-function reportOpaque(step: StepModel, diagnostics: Diagnostic[]): void {
-  if (!step.terms.some((term) => term.species.opaque)) return;
-  const opaque = step.terms.filter((term) => term.species.opaque).map((term) => term.species.key);
+function reportOpaque(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
+  if (balance.elementsChecked) return;
+  const opaque = termsOf(step).filter((term) => term.species.opaque).map((term) => term.species.key);
   diagnostics.push(finding('opaque-species', step.source, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }
 
@@ -64,7 +64,7 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     reportImbalance(step, balance, diagnostics);
     reportFix(step, candidates, diagnostics);
   }
-  reportOpaque(step, diagnostics);
+  reportOpaque(step, balance, diagnostics);
   checkStepRules(step, diagnostics);
   const stepClass = reportClass(step, diagnostics);
   const enthalpy = stepEnthalpy(step, lookup);

@@ -1,7 +1,7 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { flatText } from './flat-text';
-import type { StepModel, StepTerm } from './step-model';
+import { termsOf, type StepModel, type StepTerm } from './step-model';
 
 /** The step's class from the change in radical count (analysis.md, "Steps"). */
 export type StepClass = 'initiation' | 'propagation' | 'branching' | 'termination' | 'non-radical';
@@ -33,8 +33,7 @@ export function molecularity(step: StepModel): number {
 
 /** Integer coefficients and molecularity ≤ 3. */
 export function isElementary(step: StepModel): boolean {
-  const whole = step.terms.every((term) => term.coef.isInteger());
-  return whole && molecularity(step) <= 3;
+  return step.wholeCoefficients && molecularity(step) <= 3;
 }
 
 function thirdBodyCount(terms: readonly StepTerm[]): number {
@@ -55,8 +54,8 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   }
   const count = molecularity(step);
   if (count > 3) diagnostics.push(finding('molecularity-above-three', source, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
-  if (step.terms.every((term) => term.coef.isInteger())) return;
-  const lumped = step.terms.filter((term) => !term.coef.isInteger());
+  if (step.wholeCoefficients) return;
+  const lumped = termsOf(step).filter((term) => !term.coef.isInteger());
   const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
   diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
 }

@@ -1,6 +1,6 @@
 import { Fraction, lcm } from './fraction';
 import { rank, type SparseRow } from './integer-matrix';
-import { netOf, type StepModel } from './step-model';
+import { netOf, termsOf, type StepModel } from './step-model';
 
 /** The stoichiometric matrix by species: key → (step index → ν), exact. */
 export interface Stoichiometry {
@@ -21,7 +21,7 @@ export function buildStoichiometry(steps: readonly StepModel[]): Stoichiometry {
   const aside = new Set<string>();
   const columns: Map<string, Fraction>[] = [];
   steps.forEach((step, index) => {
-    for (const term of step.terms) {
+    for (const term of termsOf(step)) {
       if (term.species.kind === 'photon' || term.species.kind === 'third-body') aside.add(term.species.key);
     }
     const column = netOf(step);

@@ -1,6 +1,7 @@
 import { MOLAR_PHOTON_ENERGY_KJ_NM } from './constants';
 import { THERMO_RECORDS } from './thermo-data';
 import { createEnthalpyLookup, roundNoise } from './thermo-lookup';
+import { ScratchList } from './scratch-list';
 
 export { createEnthalpyLookup } from './thermo-lookup';
 
@@ -44,7 +45,7 @@ export function reactionEnthalpy(
   terms: { key: string; coef: number }[],
   lookup: EnthalpyLookup,
 ): ReactionEnthalpy {
-  const net: NetReaction = { keys: [], coefs: [] };
+  const net = newNetReaction();
   for (const { key, coef } of terms) addToNet(net, key, coef);
   return netEnthalpy(net, lookup);
 }
@@ -54,44 +55,63 @@ export function reactionEnthalpy(
  * species, so a scan finds a key faster than a Map, and the lists can be reused step after step.
  */
 export interface NetReaction {
-  keys: string[];
-  coefs: number[];
+  keys: ScratchList<string>;
+  coefs: ScratchList<number>;
+}
+
+export function newNetReaction(): NetReaction {
+  return { keys: new ScratchList(), coefs: new ScratchList() };
+}
+
+/** Empties a net reaction for reuse. */
+export function clearNet(net: NetReaction): void {
+  net.keys.clear();
+  net.coefs.clear();
 }
 
 /** Adds ν of one term to a net reaction (photons and third bodies left out). */
 export function addToNet(net: NetReaction, key: string, coef: number): void {
   if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
   if (NOT_SPECIES.has(key)) return;
-  const index = net.keys.indexOf(key);
+  const { keys, coefs } = net;
+  let index = keys.size - 1;
+  while (index >= 0 && keys.at(index) !== key) index -= 1;
   if (index < 0) {
-    net.keys.push(key);
-    net.coefs.push(coef);
-  } else net.coefs[index] += coef;
+    keys.push(key);
+    coefs.push(coef);
+  } else coefs.items[index] += coef;
 }
+
+// Scratch lists for one net reaction at a time, copied out at their exact size: lists grown by
+// `push` would keep room for 16 entries, on every step of a large text.
+const missingScratch = new ScratchList<string>();
+const usedScratch = new ScratchList<EnthalpyEntry>();
 
 /** ΔH = Σ ν ΔfH° of a net reaction built with `addToNet`; species whose ν is 0 are not looked up. */
 export function netEnthalpy(net: NetReaction, lookup: EnthalpyLookup): ReactionEnthalpy {
-  let missing: string[] | null = null;
-  let used: EnthalpyEntry[] | null = null;
+  missingScratch.clear(); // in case a lookup threw halfway through the last reaction
+  usedScratch.clear();
   let dH = 0;
   let variance: number | null = 0;
-  for (let index = 0; index < net.keys.length; index += 1) {
-    const key = net.keys[index];
-    const coef = net.coefs[index];
+  for (let index = 0; index < net.keys.size; index += 1) {
+    const key = net.keys.at(index);
+    const coef = net.coefs.at(index);
     if (Math.abs(coef) < 1e-12) continue;
     const entry = lookup(key);
     if (!entry) {
-      (missing ??= []).push(key);
+      missingScratch.push(key);
       continue;
     }
-    (used ??= []).push(entry);
+    usedScratch.push(entry);
     dH += coef * entry.dfH;
     variance = entry.uncertainty === null || variance === null ? null : variance + (coef * entry.uncertainty) ** 2;
   }
-  // Copies sized to their content: a list grown by `push` keeps room for 16 entries, on every step of a large text.
-  const usedList = used ? used.slice() : [];
-  if (missing) return { dH: null, missing: missing.slice(), used: usedList, uncertainty: null };
-  return { dH: roundNoise(dH), missing: NONE_MISSING, used: usedList, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
+  const used = usedScratch.copy();
+  if (missingScratch.size > 0) {
+    const missing = missingScratch.copy();
+    return { dH: null, missing, used, uncertainty: null };
+  }
+  return { dH: roundNoise(dH), missing: NONE_MISSING, used, uncertainty: variance === null ? null : roundNoise(Math.sqrt(variance)) };
 }
 
 /**

@@ -100,7 +100,7 @@ function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: Registe
     const context = { steps, stoichiometry: buildStoichiometry(steps), stepDH: stepJson.map((step) => step.dH), lookup, diagnostics };
     return analyseRoutes(context, species, settings, maxRouteSteps);
   }
-  const intermediates = formedAndConsumedKeys(steps, species, settings.terminal);
+  const intermediates = formedAndConsumedKeys(species, settings.terminal);
   const message = `routes are computed for up to ${MAX_ROUTE_ANALYSIS_STEPS} steps; this mechanism has ${steps.length}`;
   diagnostics.push(finding('routes-too-large', steps[0].source, message));
   const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;

@@ -23,6 +23,40 @@ export interface RegisteredSpecies extends SpeciesInfo {
   terms: Map<Fraction, StepTerm>;
   /** …except the term without a coefficient, the commonest, kept here. */
   unitTerm: StepTerm | null;
+  /** Written as a reactant (consumed) or a product (formed) somewhere; a reversible step counts both ways. */
+  consumed: boolean;
+  formed: boolean;
+}
+
+/**
+ * The listed record, built field by field: every species then has one object shape (a spread
+ * of the resolution plus the fields above took several shape changes per species).
+ */
+function listed(info: SpeciesInfo, node: ParticleNode, order: number): RegisteredSpecies {
+  return {
+    key: info.key,
+    kind: info.kind,
+    formula: info.formula,
+    name: info.name,
+    elements: info.elements,
+    charge: info.charge,
+    sites: info.sites,
+    electrons: info.electrons,
+    radical: info.radical,
+    reactive: info.reactive,
+    stateTagged: info.stateTagged,
+    radicalMarks: info.radicalMarks,
+    declared: info.declared,
+    opaque: info.opaque,
+    firstLine: node.line,
+    firstColumn: node.column,
+    order,
+    composition: compositionList(info.elements),
+    terms: new Map(),
+    unitTerm: null,
+    consumed: false,
+    formed: false,
+  };
 }
 
 /** Most spellings kept between analyses (a large mechanism has about one species per four steps). */
@@ -48,6 +82,8 @@ const RESERVED_CACHE_KEYS = { photon: '%photon', 'third-body': '%third-body', si
  */
 export class SpeciesRegistry {
   readonly byKey = new Map<string, RegisteredSpecies>();
+  /** Listed species by the text they were written as, so that a spelling met again costs one lookup. */
+  private readonly byText = new Map<string, RegisteredSpecies>();
   private readonly cache: Map<string, Resolution>;
 
   constructor(
@@ -63,6 +99,9 @@ export class SpeciesRegistry {
    */
   resolve(node: ParticleNode): SpeciesInfo | null {
     const text = node.kind === 'species' ? node.text : RESERVED_CACHE_KEYS[node.kind];
+    // A listed spelling resolved without problems (one with problems is never listed).
+    const known = this.byText.get(text);
+    if (known) return known;
     let resolution = this.cache.get(text);
     if (!resolution) {
       resolution = resolveParticle(node, this.declarations);
@@ -78,18 +117,11 @@ export class SpeciesRegistry {
 
   /** Lists a species (first place it was written wins) and returns the listed record. */
   register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
-    const known = this.byKey.get(info.key);
-    if (known) return known;
-    const registered: RegisteredSpecies = {
-      ...info,
-      firstLine: node.line,
-      firstColumn: node.column,
-      order: this.byKey.size,
-      composition: compositionList(info.elements),
-      terms: new Map(),
-      unitTerm: null,
-    };
-    this.byKey.set(info.key, registered);
+    const text = node.kind === 'species' ? node.text : RESERVED_CACHE_KEYS[node.kind];
+    if (this.byText.get(text) === info) return info as RegisteredSpecies;
+    let registered = this.byKey.get(info.key);
+    if (!registered) this.byKey.set(info.key, (registered = listed(info, node, this.byKey.size)));
+    this.byText.set(text, registered);
     return registered;
   }
 

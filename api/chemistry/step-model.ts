@@ -137,6 +137,18 @@ function mergeSide(from: number, to: number, registry: SpeciesRegistry): StepTer
   return merged.copy();
 }
 
+/** Marks which species the step consumes and forms (a reversible step both ways), while they are at hand. */
+function markFormedAndConsumed(reactants: readonly StepTerm[], products: readonly StepTerm[], reversible: boolean): void {
+  for (const { species } of reactants) {
+    species.consumed = true;
+    if (reversible) species.formed = true;
+  }
+  for (const { species } of products) {
+    species.formed = true;
+    if (reversible) species.consumed = true;
+  }
+}
+
 function findPhoton(terms: readonly TermNode[]) {
   for (const term of terms) if (term.particle.kind === 'photon') return term.particle;
   return undefined;
@@ -152,6 +164,7 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   const reactants = mergeSide(0, split, registry);
   const products = mergeSide(split, readSpecies.size, registry);
   forgetRead();
+  markFormedAndConsumed(reactants, products, node.reversible);
   const label = node.label?.text ?? null;
   const photon = findPhoton(node.products);
   const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;

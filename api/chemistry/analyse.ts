@@ -1,18 +1,16 @@
 import { parseMechanism } from '@grammar/parse';
 import type { Diagnostic } from '@grammar/diagnostics';
-import type { StepNode } from '@grammar/ast';
 import type { MechanismAnalysis, SpeciesJson, SpeciesRole, StepJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
-import { reportDuplicates } from './duplicates';
-import { cachedLookup } from './enthalpy';
+import { cachedLookup, enthalpyOf } from './enthalpy';
 import { formedAndConsumedKeys } from './formed-and-consumed';
 import { readDirectives, type MechanismSettings } from './directives';
 import { reportRadicalMarks } from './radical-marks';
 import { analyseRoutes, type RouteAnalysis } from './route-report';
 import { assignRoles } from './roles';
 import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
-import { buildStep, type StepModel } from './step-model';
-import { reportStep } from './step-report';
+import type { StepModel } from './step-model';
+import { StepPass } from './step-pass';
 import { buildStoichiometry } from './stoichiometry';
 import { builtinEnthalpy, type EnthalpyLookup } from './thermo';
 import { resolveDirectiveSpecies } from './directive-species';
@@ -36,63 +34,41 @@ export interface AnalyseOptions {
   maxRouteSteps?: number;
 }
 
-/** Builds each step node as it comes; positions count every well-formed step line, built or not. */
-function stepBuilder(registry: SpeciesRegistry, diagnostics: Diagnostic[]) {
-  const steps: StepModel[] = [];
-  let position = 0;
-  const add = (node: StepNode) => {
-    position += 1;
-    const step = buildStep(node, position, registry, diagnostics);
-    if (!step) return;
-    step.index = steps.length;
-    steps.push(step);
-  };
-  return { steps, add };
-}
-
-/** Parses and builds the steps; the parse tree is not kept (the steps keep what they need of it). */
-function readMechanism(text: string) {
-  if (typeof text === 'string' && !text.includes(DECLARATION_MARK)) return readUndeclared(text);
+/** Parses, builds and reports the steps; the parse tree is not kept (the steps keep what they need of it). */
+function readMechanism(text: string, lookup: EnthalpyLookup) {
+  if (typeof text === 'string' && !text.includes(DECLARATION_MARK)) return readUndeclared(text, lookup);
   const parsed = parseMechanism(text);
   const diagnostics = [...parsed.diagnostics];
   const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
   const registry = new SpeciesRegistry(settings.declarations, diagnostics);
-  const builder = stepBuilder(registry, diagnostics);
-  parsed.steps.forEach(builder.add);
-  return { diagnostics, settings, registry, steps: builder.steps };
+  const pass = new StepPass(registry, lookup, diagnostics);
+  parsed.steps.forEach(pass.add);
+  pass.finish();
+  return { diagnostics, settings, registry, pass };
 }
 
 /**
- * Without %species declarations every species resolves on its own, so each step is built as soon
- * as its line is parsed: the trees of a large text then die young instead of all being held
- * (and copied by the collector) until the last line. The diagnostics keep the order of
+ * Without %species declarations every species resolves on its own, so each step is built and
+ * reported as soon as its line is parsed: the trees of a large text then die young instead of all
+ * being held (and copied by the collector) until the last line. The diagnostics keep the order of
  * `readMechanism`: parser, directives, then steps.
  */
-function readUndeclared(text: string) {
+function readUndeclared(text: string, lookup: EnthalpyLookup) {
   const stepDiagnostics: Diagnostic[] = [];
   const registry = new SpeciesRegistry(new Map(), stepDiagnostics);
-  const builder = stepBuilder(registry, stepDiagnostics);
-  const parsed = parseMechanism(text, builder.add);
+  const pass = new StepPass(registry, lookup, stepDiagnostics);
+  const parsed = parseMechanism(text, pass.add);
+  pass.finish();
   const diagnostics = [...parsed.diagnostics];
   const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
   for (const item of stepDiagnostics) diagnostics.push(item);
-  return { diagnostics, settings, registry, steps: builder.steps };
+  return { diagnostics, settings, registry, pass };
 }
 
 function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: EnthalpyLookup): SpeciesJson {
-  const entry = item.kind === 'species' ? lookup(item.key) : null;
+  const entry = item.kind === 'species' ? enthalpyOf(item, lookup) : null;
   const { key, formula, name, kind, elements, charge, sites, electrons, radical, reactive, declared, opaque, firstLine } = item;
   return { key, formula, name, kind, elements, charge, sites, electrons, radical, reactive, declared, opaque, role, dfH: entry?.dfH ?? null, dfHSource: entry?.source ?? null, firstLine };
-}
-
-function reportMissingEnthalpies(steps: readonly StepJson[], diagnostics: Diagnostic[]): void {
-  const missing = new Map<string, StepJson>();
-  for (const step of steps) for (const key of step.missingEnthalpies) if (!missing.has(key)) missing.set(key, step);
-  if (missing.size === 0) return;
-  const [firstKey, firstStep] = [...missing][0];
-  const names = [...missing.keys()];
-  const shown = names.slice(0, 20).join(', ') + (names.length > 20 ? `, and ${names.length - 20} more` : '');
-  diagnostics.push(finding('enthalpy-missing', firstStep, `no enthalpy of formation for ${shown}; ΔH of the steps with them is left empty`, { found: firstKey }));
 }
 
 function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
@@ -119,12 +95,11 @@ function emptyRoutes(diagnostics: Diagnostic[]): RouteAnalysis {
  */
 export function analyseMechanism(text: string, options: AnalyseOptions = {}): MechanismAnalysis {
   const lookup = cachedLookup(options.enthalpy ?? builtinEnthalpy);
-  const { diagnostics, settings, registry, steps } = readMechanism(text);
+  const { diagnostics, settings, registry, pass } = readMechanism(text, lookup);
+  const { steps, json: stepJson } = pass;
   const species = registry.all();
-  const stepJson = steps.map((step) => reportStep(step, lookup, species, diagnostics));
-  reportDuplicates(steps, stepJson.map((step) => step.normalised), diagnostics);
   reportRadicalMarks(species, diagnostics);
-  reportMissingEnthalpies(stepJson, diagnostics);
+  pass.missingEnthalpies.report(diagnostics);
   const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
   const routes = steps.length > 0
     ? routesOrNote(steps, stepJson, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)

@@ -1,4 +1,5 @@
 import type { Fraction } from './fraction';
+import type { RegisteredSpecies } from './species-registry';
 import type { StepModel } from './step-model';
 import { roundNoise } from './thermo-lookup';
 import { addToNet, clearNet, netEnthalpy, newNetReaction, reactionEnthalpy, type NetReaction, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
@@ -23,16 +24,22 @@ export interface StepEnthalpy {
   thresholdNm: number | null;
 }
 
+/** The species' entry, looked up once per analysis and kept on the listed species (no table lookup per term). */
+export function enthalpyOf(species: RegisteredSpecies, lookup: EnthalpyLookup): EnthalpyEntry | null {
+  if (species.enthalpy === undefined) species.enthalpy = lookup(species.key);
+  return species.enthalpy;
+}
+
 /** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
   const net = stepNet;
   clearNet(net);
   let photolysis = false;
   for (const term of step.reactants) {
-    addToNet(net, term.key, -term.coef.toNumber());
+    addToNet(net, term.key, -term.coef.toNumber(), enthalpyOf(term.species, lookup));
     if (term.species.kind === 'photon') photolysis = true;
   }
-  for (const term of step.products) addToNet(net, term.key, term.coef.toNumber());
+  for (const term of step.products) addToNet(net, term.key, term.coef.toNumber(), enthalpyOf(term.species, lookup));
   const { dH, missing, used } = netEnthalpy(net, lookup);
   return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
 }

@@ -6,6 +6,7 @@ import type { SpeciesInfo } from './species-model';
 import { compositionList, type CompositionList } from './species-composition';
 import type { Fraction } from './fraction';
 import type { StepTerm } from './step-model';
+import type { EnthalpyEntry } from './thermo';
 
 /**
  * A species met in the mechanism, with where it was first written. The last three fields belong
@@ -26,6 +27,8 @@ export interface RegisteredSpecies extends SpeciesInfo {
   /** Written as a reactant (consumed) or a product (formed) somewhere; a reversible step counts both ways. */
   consumed: boolean;
   formed: boolean;
+  /** ΔfH° of the species for this analysis' lookup; undefined until asked (enthalpy.ts). */
+  enthalpy: EnthalpyEntry | null | undefined;
 }
 
 /**
@@ -56,6 +59,7 @@ function listed(info: SpeciesInfo, node: ParticleNode, order: number): Registere
     unitTerm: null,
     consumed: false,
     formed: false,
+    enthalpy: undefined,
   };
 }
 

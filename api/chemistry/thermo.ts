@@ -19,8 +19,10 @@ export type EnthalpyLookup = (speciesKey: string) => EnthalpyEntry | null;
 /** The built-in table (`thermo-data/`), with state-tag and radical-mark normalisation. */
 export const builtinEnthalpy: EnthalpyLookup = createEnthalpyLookup(THERMO_RECORDS);
 
-// Shared by every reaction with all its enthalpies known (frozen: it is never filled in).
+// Shared by every reaction with all its enthalpies known, and by every one with none known
+// (frozen: they are never filled in).
 const NONE_MISSING = Object.freeze([]) as unknown as string[];
+const NONE_USED = Object.freeze([]) as unknown as EnthalpyEntry[];
 
 // A photon and a third body take part in a step without an enthalpy of formation of their own.
 const NOT_SPECIES = new Set(['hν', 'hv', 'M']);
@@ -57,20 +59,23 @@ export function reactionEnthalpy(
 export interface NetReaction {
   keys: ScratchList<string>;
   coefs: ScratchList<number>;
+  /** The entry of each key when the caller already knows it (undefined: ask the lookup). */
+  entries: ScratchList<EnthalpyEntry | null | undefined>;
 }
 
 export function newNetReaction(): NetReaction {
-  return { keys: new ScratchList(), coefs: new ScratchList() };
+  return { keys: new ScratchList(), coefs: new ScratchList(), entries: new ScratchList() };
 }
 
 /** Empties a net reaction for reuse. */
 export function clearNet(net: NetReaction): void {
   net.keys.clear();
   net.coefs.clear();
+  net.entries.clear();
 }
 
-/** Adds ν of one term to a net reaction (photons and third bodies left out). */
-export function addToNet(net: NetReaction, key: string, coef: number): void {
+/** Adds ν of one term to a net reaction (photons and third bodies left out); `entry` when already known. */
+export function addToNet(net: NetReaction, key: string, coef: number, entry?: EnthalpyEntry | null): void {
   if (!Number.isFinite(coef)) throw new Error(`reactionEnthalpy: coefficient of "${key}" is ${coef}, not a finite number`);
   if (NOT_SPECIES.has(key)) return;
   const { keys, coefs } = net;
@@ -79,6 +84,7 @@ export function addToNet(net: NetReaction, key: string, coef: number): void {
   if (index < 0) {
     keys.push(key);
     coefs.push(coef);
+    net.entries.push(entry);
   } else coefs.items[index] += coef;
 }
 
@@ -97,7 +103,8 @@ export function netEnthalpy(net: NetReaction, lookup: EnthalpyLookup): ReactionE
     const key = net.keys.at(index);
     const coef = net.coefs.at(index);
     if (Math.abs(coef) < 1e-12) continue;
-    const entry = lookup(key);
+    const known = net.entries.at(index);
+    const entry = known === undefined ? lookup(key) : known;
     if (!entry) {
       missingScratch.push(key);
       continue;
@@ -106,7 +113,7 @@ export function netEnthalpy(net: NetReaction, lookup: EnthalpyLookup): ReactionE
     dH += coef * entry.dfH;
     variance = entry.uncertainty === null || variance === null ? null : variance + (coef * entry.uncertainty) ** 2;
   }
-  const used = usedScratch.copy();
+  const used = usedScratch.size === 0 ? NONE_USED : usedScratch.copy();
   if (missingScratch.size > 0) {
     const missing = missingScratch.copy();
     return { dH: null, missing, used, uncertainty: null };

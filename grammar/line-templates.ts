@@ -13,15 +13,42 @@ interface TokenRef {
 
 type Template = TokenRef | null | string | number | boolean | Template[] | { [key: string]: Template };
 
-const MAX_TEMPLATES = 4_096;
-const templates = new Map<string, Template>();
+/** Most line shapes kept (trie nodes); beyond this the shapes are forgotten and parsed again. */
+const MAX_SHAPE_NODES = 32_768;
 
-export function signatureOf(tokens: readonly Token[]): string {
-  // Joined in one go: a string grown token by token is a chain of concatenations that the map
-  // lookup must first copy into one piece.
-  const types: (string | undefined)[] = new Array(tokens.length);
-  for (let index = 0; index < tokens.length; index += 1) types[index] = tokens[index].type;
-  return types.join(' ');
+/**
+ * A line shape: a node of a trie over token types, reached by walking the types of a line's
+ * tokens. Walking allocates nothing for a shape seen before, where joining the types into a key
+ * made a list and a string on every line of a large text.
+ */
+export interface LineShape {
+  readonly next: Map<string | undefined, LineShape>;
+  template?: Template;
+  failure?: KnownFailure;
+}
+
+// Every node has both fields from the start (one object shape for all of them).
+const newShape = (): LineShape => ({ next: new Map(), template: undefined, failure: undefined });
+
+let root = newShape();
+let nodes = 1;
+
+export function shapeOf(tokens: readonly Token[]): LineShape {
+  if (nodes + tokens.length > MAX_SHAPE_NODES) {
+    root = newShape();
+    nodes = 1;
+  }
+  let node = root;
+  for (let index = 0; index < tokens.length; index += 1) {
+    const type = tokens[index].type;
+    let child = node.next.get(type);
+    if (!child) {
+      node.next.set(type, (child = newShape()));
+      nodes += 1;
+    }
+    node = child;
+  }
+  return node;
 }
 
 function toTemplate(node: unknown, indexOf: Map<unknown, number>): Template {
@@ -35,16 +62,15 @@ function toTemplate(node: unknown, indexOf: Map<unknown, number>): Template {
 }
 
 /** The template of a line with the same token types, if one was parsed before. */
-export function knownTemplate(signature: string): unknown {
-  return templates.get(signature);
+export function knownTemplate(shape: LineShape): unknown {
+  return shape.template;
 }
 
 /** Turns the tree nearley built for `tokens` into a template and remembers it when `keep`. */
-export function templateOf(signature: string, tokens: readonly Token[], tree: unknown, keep: boolean): unknown {
-  if (templates.size >= MAX_TEMPLATES) templates.clear();
+export function templateOf(shape: LineShape, tokens: readonly Token[], tree: unknown, keep: boolean): unknown {
   const indexOf = new Map<unknown, number>(tokens.map((token, index) => [token, index]));
   const template = toTemplate(tree, indexOf);
-  if (keep) templates.set(signature, template);
+  if (keep) shape.template = template;
   return template;
 }
 
@@ -54,14 +80,11 @@ export interface KnownFailure {
   expected: string[];
 }
 
-const failures = new Map<string, KnownFailure>();
-
 /** The failure of a line with the same token types, if one was parsed before (faulty lines cost no second parse). */
-export function knownFailure(signature: string): KnownFailure | undefined {
-  return failures.get(signature);
+export function knownFailure(shape: LineShape): KnownFailure | undefined {
+  return shape.failure;
 }
 
-export function rememberFailure(signature: string, failure: KnownFailure): void {
-  if (failures.size >= MAX_TEMPLATES) failures.clear();
-  failures.set(signature, failure);
+export function rememberFailure(shape: LineShape, failure: KnownFailure): void {
+  shape.failure = failure;
 }

@@ -5,7 +5,8 @@ import { convertDirective, convertStep } from './convert-line';
 import type { LineContext } from './convert-species';
 import { diagnostic, PARSER_CODES } from './diagnostics';
 import type { RawLine } from './raw';
-import { knownFailure, knownTemplate, rememberFailure, signatureOf, templateOf, type KnownFailure } from './line-templates';
+import { ScratchList } from './scratch-list';
+import { knownFailure, knownTemplate, rememberFailure, shapeOf, templateOf, type KnownFailure } from './line-templates';
 import grammar, { lexer } from './steps.generated';
 import { budgetSpent, lineTooLong, PARSE_TOKEN_BUDGET, textTooLarge, tooComplex } from './limits';
 import { expectedAt, syntaxDiagnostic, unbalancedBracket } from './syntax-errors';
@@ -41,7 +42,9 @@ export function parseMechanism(text: string, onStep?: StepSink): ParsedMechanism
     parsed.diagnostics.push(tooLarge);
     return parsed;
   }
-  const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
+  const body = text.replace(/^\uFEFF/, '');
+  // Splitting at a plain '\n' is much faster than at a pattern; carriage returns need the pattern.
+  const lines = body.includes('\r') ? body.split(/\r\n|\n|\r/) : body.split('\n');
   parsed.lineCount = lines.length;
   const formulas = new Map();
   const shapes = new Map();
@@ -90,11 +93,15 @@ function directiveIsKnown(context: LineContext): boolean {
   return false;
 }
 
+// The tokens of the line being lexed, copied out at their exact size (a list grown by `push`
+// keeps room for 16, on every line of a large text).
+const lexed = new ScratchList<Token>();
+
 function lexLine(text: string): Token[] {
-  const tokens: Token[] = [];
+  lexed.clear();
   lexer.reset(text);
-  for (let token = lexer.next(); token; token = lexer.next()) tokens.push(token);
-  return tokens;
+  for (let token = lexer.next(); token; token = lexer.next()) lexed.push(token);
+  return lexed.copy();
 }
 
 /** Hands nearley the tokens of one line that were already lexed. */
@@ -111,11 +118,11 @@ function replayLexer(tokens: readonly Token[]) {
 
 /** Parses one line (or reuses the template of a line with the same token types); reports the first syntax error. */
 function runGrammar(context: LineContext): RawLine | null {
-  const signature = signatureOf(context.tokens);
-  const known = knownTemplate(signature);
+  const shape = shapeOf(context.tokens);
+  const known = knownTemplate(shape);
   if (known !== undefined) return known as RawLine;
   const tokens = context.tokens;
-  const failed = knownFailure(signature);
+  const failed = knownFailure(shape);
   if (failed) return reportFailure(context, failed);
   if (context.budget.tokens < tokens.length) {
     if (context.budget.tokens >= 0) context.diagnostics.push(budgetSpent(context.line));
@@ -132,15 +139,15 @@ function runGrammar(context: LineContext): RawLine | null {
   } catch (error) {
     const token = (error as { token?: Token }).token;
     const failure = { tokenIndex: token ? tokens.indexOf(token) : null, expected: expectedAt(parser, table.length - 2) };
-    rememberFailure(signature, failure);
+    rememberFailure(shape, failure);
     return reportFailure(context, failure);
   }
   if (parser.results.length === 0) {
     const failure = { tokenIndex: null, expected: expectedAt(parser, table.length - 1) };
-    rememberFailure(signature, failure);
+    rememberFailure(shape, failure);
     return reportFailure(context, failure);
   }
-  return templateOf(signature, tokens, parser.results[0], parser.results.length === 1) as RawLine;
+  return templateOf(shape, tokens, parser.results[0], parser.results.length === 1) as RawLine;
 }
 
 function reportFailure(context: LineContext, failure: KnownFailure): null {

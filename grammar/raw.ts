@@ -50,9 +50,15 @@ export type RawDirective =
 
 export type RawLine = RawStep | RawDirective;
 
-/** Flattens a left-recursive cons list into source order. */
+/**
+ * Flattens a left-recursive cons list into source order: counted first, then filled from the
+ * end, so that the list is made at its exact size (one grown by `push` keeps room for 16).
+ */
 export function flatten<T>(list: Cons<T> | null): T[] {
-  const items: T[] = [];
-  for (let cell = list; cell; cell = cell.tail) items.push(cell.head);
-  return items.reverse();
+  let count = 0;
+  for (let cell = list; cell; cell = cell.tail) count += 1;
+  const items = new Array<T>(count);
+  let index = count;
+  for (let cell = list; cell; cell = cell.tail) items[--index] = cell.head;
+  return items;
 }

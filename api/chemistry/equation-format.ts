@@ -1,5 +1,5 @@
 import { Fraction } from './fraction';
-import { ScratchList } from './scratch-list';
+import { ScratchList } from '@grammar/scratch-list';
 
 const ONE = Fraction.ONE;
 
@@ -7,6 +7,14 @@ const ONE = Fraction.ONE;
 export interface ShownTerm {
   key: string;
   coef: Fraction;
+  /** The term as written by `termText` (coefficient 1 left out, and every coefficient), when made ahead. */
+  readonly shown?: string;
+  readonly explicit?: string;
+}
+
+/** `2 Br•`, or `Br•` for coefficient 1 unless `explicit` (`1 Br•`). */
+export function termText(key: string, coef: Fraction, explicit: boolean): string {
+  return explicit || !coef.equals(ONE) ? `${coef.toString()} ${key}` : key;
 }
 
 // The pieces of the equation being written, joined once into a flat string (see flat-text.ts): an
@@ -15,11 +23,8 @@ export interface ShownTerm {
 const pieces = new ScratchList<string>();
 
 function addTerm(term: ShownTerm, explicit: boolean): void {
-  if (explicit || !term.coef.equals(ONE)) {
-    pieces.push(term.coef.toString());
-    pieces.push(' ');
-  }
-  pieces.push(term.key);
+  const made = explicit ? term.explicit : term.shown;
+  pieces.push(made ?? termText(term.key, term.coef, explicit));
 }
 
 function addSide(terms: readonly ShownTerm[], explicit: boolean, count = terms.length): void {

@@ -121,8 +121,9 @@ export class SpeciesRegistry {
 
   /** Lists a species (first place it was written wins) and returns the listed record. */
   register(info: SpeciesInfo, node: ParticleNode): RegisteredSpecies {
+    // Only listed records carry `order`: such an info came from `byText` in `resolve`.
+    if ('order' in info) return info as RegisteredSpecies;
     const text = node.kind === 'species' ? node.text : RESERVED_CACHE_KEYS[node.kind];
-    if (this.byText.get(text) === info) return info as RegisteredSpecies;
     let registered = this.byKey.get(info.key);
     if (!registered) this.byKey.set(info.key, (registered = listed(info, node, this.byKey.size)));
     this.byText.set(text, registered);

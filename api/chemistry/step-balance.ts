@@ -1,5 +1,5 @@
 import { ELEMENTS } from './elements';
-import { ScratchList } from './scratch-list';
+import { ScratchList } from '@grammar/scratch-list';
 import { termsOf, type StepModel, type StepTerm } from './step-model';
 
 /** Conservation of elements, charge and sites in one step (products − reactants). */

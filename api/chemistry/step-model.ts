@@ -2,8 +2,9 @@ import type { TermJson } from './analysis-types';
 import type { ParticleNode, RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
+import { termText } from './equation-format';
 import { Fraction } from './fraction';
-import { ScratchList } from './scratch-list';
+import { ScratchList } from '@grammar/scratch-list';
 import type { SpeciesInfo } from './species-model';
 import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 
@@ -11,8 +12,11 @@ import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 export interface StepTerm {
   readonly species: RegisteredSpecies;
   readonly coef: Fraction;
-  /** The species key again, so that a term can be shown as it is (equation-format.ts). */
+  /** The species key again, so that a term can be shown as it is (equation-format.ts)… */
   readonly key: string;
+  /** …and the term's text in equations, made once with the shared term (equation-format.ts). */
+  readonly shown: string;
+  readonly explicit: string;
   /** The term as the analysis reports it, made once with the shared term. */
   readonly json: TermJson;
 }
@@ -108,7 +112,9 @@ function sharedTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
 
 function newTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
   const json = Object.freeze({ key: species.key, coef: coef.toNumber(), coefText: coef.toString() });
-  return Object.freeze({ species, coef, key: species.key, json });
+  const shown = termText(species.key, coef, false);
+  const explicit = termText(species.key, coef, true);
+  return Object.freeze({ species, coef, key: species.key, shown, explicit, json });
 }
 
 function allWhole(terms: readonly StepTerm[]): boolean {

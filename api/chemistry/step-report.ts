@@ -34,7 +34,7 @@ function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Dia
 
 function fixedEquation(step: StepModel, fix: BalancingFix): string {
   const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
-    const list: ShownTerm[] = terms.map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { ...term, coef: fix.to } : term));
+    const list: ShownTerm[] = terms.map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { key: term.key, coef: fix.to } : term));
     if (fix.kind === 'add' && fix.side === name) list.push({ key: fix.key, coef: fix.coef });
     return list;
   };

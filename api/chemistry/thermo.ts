@@ -1,7 +1,7 @@
 import { MOLAR_PHOTON_ENERGY_KJ_NM } from './constants';
 import { THERMO_RECORDS } from './thermo-data';
 import { createEnthalpyLookup, roundNoise } from './thermo-lookup';
-import { ScratchList } from './scratch-list';
+import { ScratchList } from '@grammar/scratch-list';
 
 export { createEnthalpyLookup } from './thermo-lookup';
 

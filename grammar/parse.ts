@@ -21,6 +21,7 @@ const BLANK_OR_COMMENT = /^\s*(?:#.*)?$/;
 const DIRECTIVE_NAME = /^\s*%([A-Za-z_]*)/;
 
 const compiled = nearley.Grammar.fromCompiled(grammar);
+const NO_TOKENS: readonly Token[] = Object.freeze([]);
 
 /** Receives each step as soon as its line is parsed (instead of the step list). */
 export type StepSink = (step: StepNode) => void;
@@ -49,8 +50,12 @@ export function parseMechanism(text: string, onStep?: StepSink): ParsedMechanism
   const formulas = new Map();
   const shapes = new Map();
   const budget = { tokens: PARSE_TOKEN_BUDGET };
+  // One context, moved from line to line (lines are read one after another; nothing keeps it).
+  const context: LineContext = { line: 0, text: '', tokens: NO_TOKENS, diagnostics: parsed.diagnostics, formulas, shapes, budget };
   for (let index = 0; index < lines.length; index += 1) {
-    const context: LineContext = { line: index + 1, text: lines[index], tokens: [], diagnostics: parsed.diagnostics, formulas, shapes, budget };
+    context.line = index + 1;
+    context.text = lines[index];
+    context.tokens = NO_TOKENS;
     try {
       parseLine(context, parsed, onStep);
     } catch (error) {

@@ -36,10 +36,10 @@ export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEntha
   clearNet(net);
   let photolysis = false;
   for (const term of step.reactants) {
-    addToNet(net, term.key, -term.coef.toNumber(), enthalpyOf(term.species, lookup));
+    addToNet(net, term.key, -term.coef, enthalpyOf(term.species, lookup));
     if (term.species.kind === 'photon') photolysis = true;
   }
-  for (const term of step.products) addToNet(net, term.key, term.coef.toNumber(), enthalpyOf(term.species, lookup));
+  for (const term of step.products) addToNet(net, term.key, term.coef, enthalpyOf(term.species, lookup));
   const { dH, missing, used } = netEnthalpy(net, lookup);
   return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
 }

@@ -3,14 +3,11 @@ import { ScratchList } from '@grammar/scratch-list';
 
 const ONE = Fraction.ONE;
 
-/** A species and its coefficient, as shown in an equation. */
-export interface ShownTerm {
-  key: string;
-  coef: Fraction;
-  /** The term as written by `termText` (coefficient 1 left out, and every coefficient), when made ahead. */
-  readonly shown?: string;
-  readonly explicit?: string;
-}
+/**
+ * A species and its coefficient, as shown in an equation; or a term whose texts were made ahead
+ * by `termText` (coefficient 1 left out, and every coefficient), as the steps' terms are.
+ */
+export type ShownTerm = { key: string; coef: Fraction } | { key: string; readonly shown: string; readonly explicit: string };
 
 /** `2 Br•`, or `Br•` for coefficient 1 unless `explicit` (`1 Br•`). */
 export function termText(key: string, coef: Fraction, explicit: boolean): string {
@@ -23,8 +20,8 @@ export function termText(key: string, coef: Fraction, explicit: boolean): string
 const pieces = new ScratchList<string>();
 
 function addTerm(term: ShownTerm, explicit: boolean): void {
-  const made = explicit ? term.explicit : term.shown;
-  pieces.push(made ?? termText(term.key, term.coef, explicit));
+  if ('shown' in term) pieces.push(explicit ? term.explicit : term.shown);
+  else pieces.push(termText(term.key, term.coef, explicit));
 }
 
 function addSide(terms: readonly ShownTerm[], explicit: boolean, count = terms.length): void {

@@ -18,8 +18,8 @@ function denominatorLcm(step: StepModel): number {
   if (step.wholeCoefficients) return 1;
   let common = 1;
   for (const term of termsOf(step)) {
-    if (term.coef.isInteger()) continue;
-    const den = Number(term.coef.den);
+    if (term.fraction.isInteger()) continue;
+    const den = Number(term.fraction.den);
     let a = common;
     let b = den;
     while (b !== 0) [a, b] = [b, a % b];
@@ -45,9 +45,9 @@ interface Totals {
 }
 
 function accumulate(terms: readonly StepTerm[], sign: number, scale: number, totals: Totals): void {
-  for (const { species, coef } of terms) {
+  for (const { species, coef, fraction } of terms) {
     // Whole numbers below 2^53 add exactly in floating point; the coefficients were scaled to whole numbers.
-    const weight = scale === 1 ? sign * coef.toNumber() : sign * Number(coef.num) * (scale / Number(coef.den));
+    const weight = scale === 1 ? sign * coef : sign * Number(fraction.num) * (scale / Number(fraction.den));
     if (species.opaque) totals.opaque = true;
     const list = species.composition;
     for (let index = 0; index < list.length; index += 2) {

@@ -8,17 +8,22 @@ import { ScratchList } from '@grammar/scratch-list';
 import type { SpeciesInfo } from './species-model';
 import type { RegisteredSpecies, SpeciesRegistry } from './species-registry';
 
-/** One species on one side of a step, with equal terms merged (`A + A` is `2 A`). */
-export interface StepTerm {
-  readonly species: RegisteredSpecies;
-  readonly coef: Fraction;
-  /** The species key again, so that a term can be shown as it is (equation-format.ts)… */
+/**
+ * One species on one side of a step, with equal terms merged (`A + A` is `2 A`). A term is also
+ * the term of the analysis' JSON: its own enumerable fields are exactly a TermJson, and the fields
+ * the engine works with are not (see SharedTerm), so that the steps and their JSON share one list
+ * of terms (a large mechanism then holds no second list and no second object per term).
+ */
+export interface StepTerm extends TermJson {
   readonly key: string;
-  /** …and the term's text in equations, made once with the shared term (equation-format.ts). */
+  readonly coef: number;
+  readonly coefText: string;
+  /** The coefficient, exactly. */
+  readonly fraction: Fraction;
+  readonly species: RegisteredSpecies;
+  /** The term's text in equations, made once with the shared term (equation-format.ts). */
   readonly shown: string;
   readonly explicit: string;
-  /** The term as the analysis reports it, made once with the shared term. */
-  readonly json: TermJson;
 }
 
 /**
@@ -110,15 +115,53 @@ function sharedTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
   return term;
 }
 
-function newTerm(species: RegisteredSpecies, coef: Fraction): StepTerm {
-  const json = Object.freeze({ key: species.key, coef: coef.toNumber(), coefText: coef.toString() });
-  const shown = termText(species.key, coef, false);
-  const explicit = termText(species.key, coef, true);
-  return Object.freeze({ species, coef, key: species.key, shown, explicit, json });
+/**
+ * A shared term. Its public fields are the TermJson; the engine's are private fields read through
+ * getters, so they are neither enumerable nor serialised, and cost no more to make or read than
+ * ordinary fields (defining non-enumerable properties one by one cost microseconds per term).
+ */
+class SharedTerm implements StepTerm {
+  readonly key: string;
+  readonly coef: number;
+  readonly coefText: string;
+  readonly #fraction: Fraction;
+  readonly #species: RegisteredSpecies;
+  readonly #shown: string;
+  readonly #explicit: string;
+
+  constructor(species: RegisteredSpecies, fraction: Fraction) {
+    this.key = species.key;
+    this.coef = fraction.toNumber();
+    this.coefText = fraction.toString();
+    this.#fraction = fraction;
+    this.#species = species;
+    this.#shown = termText(species.key, fraction, false);
+    this.#explicit = termText(species.key, fraction, true);
+  }
+
+  get fraction(): Fraction {
+    return this.#fraction;
+  }
+
+  get species(): RegisteredSpecies {
+    return this.#species;
+  }
+
+  get shown(): string {
+    return this.#shown;
+  }
+
+  get explicit(): string {
+    return this.#explicit;
+  }
+}
+
+function newTerm(species: RegisteredSpecies, fraction: Fraction): StepTerm {
+  return Object.freeze(new SharedTerm(species, fraction));
 }
 
 function allWhole(terms: readonly StepTerm[]): boolean {
-  for (const term of terms) if (!term.coef.isInteger()) return false;
+  for (const term of terms) if (!term.fraction.isInteger()) return false;
   return true;
 }
 
@@ -137,7 +180,7 @@ function mergeSide(from: number, to: number, registry: SpeciesRegistry): StepTer
     const coef = readCoefs.at(read);
     let index = merged.size - 1;
     while (index >= 0 && merged.at(index).key !== species.key) index -= 1;
-    if (index >= 0) merged.items[index] = sharedTerm(merged.at(index).species, merged.at(index).coef.add(coef));
+    if (index >= 0) merged.items[index] = sharedTerm(merged.at(index).species, merged.at(index).fraction.add(coef));
     else merged.push(sharedTerm(registry.register(species, readParticles.at(read)), coef));
   }
   return merged.copy();
@@ -182,9 +225,9 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
 /** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */
 export function netOf(step: StepModel): Map<string, Fraction> {
   const net = new Map<string, Fraction>();
-  for (const term of step.reactants) net.set(term.species.key, term.coef.neg());
+  for (const term of step.reactants) net.set(term.species.key, term.fraction.neg());
   for (const term of step.products) {
-    const value = (net.get(term.species.key) ?? Fraction.ZERO).add(term.coef);
+    const value = (net.get(term.species.key) ?? Fraction.ZERO).add(term.fraction);
     if (value.isZero()) net.delete(term.species.key);
     else net.set(term.species.key, value);
   }

@@ -1,5 +1,5 @@
 import type { Diagnostic } from '@grammar/diagnostics';
-import type { StepJson, TermJson } from './analysis-types';
+import type { StepJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
 import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
@@ -11,9 +11,6 @@ import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
-// Shared terms carry their JSON (step-model.ts); `map` sizes the list exactly, where a list grown by
-// `push` keeps room for 16 terms on every step.
-const termsJson = (terms: readonly StepTerm[]): TermJson[] => terms.map((term) => term.json);
 
 function signed(value: number): string {
   return value > 0 ? `+${value}` : String(value);
@@ -78,8 +75,9 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     equation: equationText(step.reactants, step.products, step.reversible),
     normalised: normalisedStep(step),
     reversible: step.reversible,
-    reactants: termsJson(step.reactants),
-    products: termsJson(step.products),
+    // The steps' own lists: their terms are TermJson with the engine's fields hidden (step-model.ts).
+    reactants: step.reactants,
+    products: step.products,
     imbalance: balance.imbalance,
     chargeDelta: balance.chargeDelta,
     siteDelta: balance.siteDelta,

@@ -8,7 +8,7 @@ export type StepClass = 'initiation' | 'propagation' | 'branching' | 'terminatio
 
 function radicalCount(terms: readonly StepTerm[]): number {
   let count = 0;
-  for (const term of terms) if (term.species.radical) count += term.coef.toNumber();
+  for (const term of terms) if (term.species.radical) count += term.coef;
   return count;
 }
 
@@ -27,7 +27,7 @@ export function classify(step: StepModel): { stepClass: StepClass; before: numbe
 /** Reactant particles including M, excluding the photon. */
 export function molecularity(step: StepModel): number {
   let count = 0;
-  for (const term of step.reactants) if (term.species.kind !== 'photon') count += term.coef.toNumber();
+  for (const term of step.reactants) if (term.species.kind !== 'photon') count += term.coef;
   return count;
 }
 
@@ -38,7 +38,7 @@ export function isElementary(step: StepModel): boolean {
 
 function thirdBodyCount(terms: readonly StepTerm[]): number {
   const term = terms.find((t) => t.species.kind === 'third-body');
-  return term ? term.coef.toNumber() : 0;
+  return term ? term.coef : 0;
 }
 
 /** The photon, third-body, molecularity and lumping rules of one step. */
@@ -55,8 +55,8 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   const count = molecularity(step);
   if (count > 3) diagnostics.push(finding('molecularity-above-three', source, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
   if (step.wholeCoefficients) return;
-  const lumped = termsOf(step).filter((term) => !term.coef.isInteger());
-  const listed = lumped.map((term) => `${term.coef.toString()} ${term.species.key}`).join(', ');
+  const lumped = termsOf(step).filter((term) => !term.fraction.isInteger());
+  const listed = lumped.map((term) => `${term.coefText} ${term.species.key}`).join(', ');
   diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
 }
 

@@ -48,7 +48,7 @@ function difference(step: StepModel): Vector {
   const add = (terms: StepTerm[], sign: Fraction) => {
     for (const term of terms) {
       for (const [dimension, count] of composition(term.species)) {
-        total.set(dimension, (total.get(dimension) ?? Fraction.ZERO).add(count.mul(term.coef).mul(sign)));
+        total.set(dimension, (total.get(dimension) ?? Fraction.ZERO).add(count.mul(term.fraction).mul(sign)));
       }
     }
   };
@@ -83,8 +83,8 @@ function coefficientFixes(step: StepModel, diff: Vector): BalancingFix[] {
     const target = new Map([...diff].map(([dimension, value]) => [dimension, value.mul(sign)]));
     for (const term of terms) {
       const delta = multipleOf(target, composition(term.species));
-      const to = delta ? term.coef.add(delta) : null;
-      if (to && to.sign() > 0) fixes.push({ kind: 'coefficient', side, key: term.species.key, from: term.coef, to });
+      const to = delta ? term.fraction.add(delta) : null;
+      if (to && to.sign() > 0) fixes.push({ kind: 'coefficient', side, key: term.species.key, from: term.fraction, to });
     }
   }
   return fixes;

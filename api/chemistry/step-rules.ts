@@ -60,12 +60,35 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
 }
 
+// The note's text, one per class and radical counts: the note sits on its step's line, so the text
+// needs no step id and is shared (a large mechanism has tens of thousands of these notes).
+const classNotes = new Map<StepClass, Map<number, Map<number, string>>>();
+const MAX_CLASS_NOTES = 1_000;
+let classNoteCount = 0;
+
+function classNote(stepClass: StepClass, before: number, after: number): string {
+  if (classNoteCount >= MAX_CLASS_NOTES) {
+    classNotes.clear(); // odd coefficients can make many counts; the texts are cheap to make again
+    classNoteCount = 0;
+  }
+  let byBefore = classNotes.get(stepClass);
+  if (!byBefore) classNotes.set(stepClass, (byBefore = new Map()));
+  let byAfter = byBefore.get(before);
+  if (!byAfter) byBefore.set(before, (byAfter = new Map()));
+  let note = byAfter.get(after);
+  if (note === undefined) {
+    note = flatText(stepClass === 'initiation' ? 'an ' : 'a ', stepClass, ' step: radicals ', before, ' → ', after);
+    byAfter.set(after, note);
+    classNoteCount += 1;
+  }
+  return note;
+}
+
 /** Reports steps that start, branch or end radical chains. */
 export function reportClass(step: StepModel, diagnostics: Diagnostic[]): StepClass {
   const { stepClass, before, after } = classify(step);
   if (stepClass === 'initiation' || stepClass === 'branching' || stepClass === 'termination') {
-    const message = flatText('step ', step.id, stepClass === 'initiation' ? ' is an ' : ' is a ', stepClass, ' step: radicals ', before, ' → ', after);
-    diagnostics.push(finding('step-class', step.source, message));
+    diagnostics.push(finding('step-class', step.source, classNote(stepClass, before, after)));
   }
   return stepClass;
 }

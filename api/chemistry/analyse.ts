@@ -78,7 +78,7 @@ function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: Registe
   }
   const intermediates = formedAndConsumedKeys(species, settings.terminal);
   const message = `routes are computed for up to ${MAX_ROUTE_ANALYSIS_STEPS} steps; this mechanism has ${steps.length}`;
-  diagnostics.push(finding('routes-too-large', steps[0].source, message));
+  diagnostics.push(finding('routes-too-large', steps[0], message));
   const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;
   return { intermediates, explanation, routes: [], overall: null, roles: assignRoles(species, steps, null, new Map()) };
 }

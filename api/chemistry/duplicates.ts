@@ -16,16 +16,16 @@ export class DuplicateSteps {
   constructor(private readonly diagnostics: Diagnostic[]) {}
 
   add(step: StepModel, normalised: string): void {
-    if (step.label && step.source.label) {
+    if (step.label && step.labelToken) {
       const first = this.labels.get(step.label);
-      if (first) this.diagnostics.push(finding('duplicate-label', step.source.label, `label ${step.label} is already used on line ${first.source.line}`, { found: step.label }));
+      if (first) this.diagnostics.push(finding('duplicate-label', step.labelToken, `label ${step.label} is already used on line ${first.line}`, { found: step.label }));
       else this.labels.set(step.label, step);
     }
     const reverse = step.reversible ? normalisedText(step.products, step.reactants, true) : null;
     const first = this.equations.get(normalised) ?? (reverse ? this.equations.get(reverse) : undefined);
     if (first) {
-      const message = `step ${step.id} repeats step ${first.id} (line ${first.source.line})`;
-      this.diagnostics.push(finding('duplicate-step', step.source, message, { found: normalised }));
+      const message = `step ${step.id} repeats step ${first.id} (line ${first.line})`;
+      this.diagnostics.push(finding('duplicate-step', step, message, { found: normalised }));
     } else this.equations.set(normalised, step);
   }
 }

@@ -54,7 +54,7 @@ function routeJson(sigma: bigint[], flags: { direct: boolean; basis: boolean }, 
 }
 
 function reportRouteNotes(set: RouteSet, productive: boolean, maxRouteSteps: number, context: RouteContext): void {
-  const at = context.steps[0].source;
+  const at = context.steps[0];
   if (set.directComplete === null) {
     context.diagnostics.push(finding('direct-routes-skipped', at, `direct routes are listed for up to ${maxRouteSteps} steps; this mechanism has ${context.steps.length} (the route basis is still given)`));
   } else if (set.directComplete === false) {

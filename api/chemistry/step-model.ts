@@ -27,26 +27,23 @@ export interface StepTerm extends TermJson {
 }
 
 /**
- * Where a step was written: all that the checks need of its parse tree, so that the tree itself
- * can be dropped once the steps are built.
+ * A well-formed step, ready for the checks and the routes. It keeps all that the checks need of
+ * its parse tree, so that the tree itself can be dropped once the steps are built; its line and
+ * column place the diagnostics about the whole step.
  */
-export interface StepSource {
-  line: number;
-  column: number;
-  label: SourceToken | null;
-  rate: RateNode | null;
-  /** The first hν written among the products (a mistake reported by the step rules). */
-  productPhoton: { line: number; column: number; text: string } | null;
-}
-
-/** A well-formed step, ready for the checks and the routes. */
 export interface StepModel {
   /** Position among the analysed steps (0-based). */
   index: number;
   /** The label, or `#n` for the n-th step when it has none. */
   id: string;
   label: string | null;
-  source: StepSource;
+  line: number;
+  column: number;
+  /** Where the label was written. */
+  labelToken: SourceToken | null;
+  rate: RateNode | null;
+  /** The first hν written among the products (a mistake reported by the step rules). */
+  productPhoton: { line: number; column: number; text: string } | null;
   reversible: boolean;
   reactants: StepTerm[];
   products: StepTerm[];
@@ -217,9 +214,22 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   const label = node.label?.text ?? null;
   const photon = findPhoton(node.products);
   const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;
-  const source = { line: node.line, column: node.column, label: node.label, rate: node.rate, productPhoton };
+
   const wholeCoefficients = allWhole(reactants) && allWhole(products);
-  return { index: -1, id: label ?? `#${position}`, label, source, reversible: node.reversible, reactants, products, wholeCoefficients };
+  return {
+    index: -1,
+    id: label ?? `#${position}`,
+    label,
+    line: node.line,
+    column: node.column,
+    labelToken: node.label,
+    rate: node.rate,
+    productPhoton,
+    reversible: node.reversible,
+    reactants,
+    products,
+    wholeCoefficients,
+  };
 }
 
 /** Net stoichiometry of a step: products − reactants, per species key (zeros dropped). */

@@ -19,13 +19,13 @@ function signed(value: number): string {
 function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
   for (const [symbol, delta] of Object.entries(balance.imbalance)) {
     const message = `step ${step.id} does not conserve ${symbol}: products − reactants = ${signed(delta)}`;
-    diagnostics.push(finding('element-imbalance', step.source, message, { found: `${symbol} ${signed(delta)}`, expected: [`${symbol} 0`] }));
+    diagnostics.push(finding('element-imbalance', step, message, { found: `${symbol} ${signed(delta)}`, expected: [`${symbol} 0`] }));
   }
   if (balance.chargeDelta !== 0) {
-    diagnostics.push(finding('charge-imbalance', step.source, `step ${step.id} changes the charge by ${signed(balance.chargeDelta)}`, { found: signed(balance.chargeDelta), expected: ['0'] }));
+    diagnostics.push(finding('charge-imbalance', step, `step ${step.id} changes the charge by ${signed(balance.chargeDelta)}`, { found: signed(balance.chargeDelta), expected: ['0'] }));
   }
   if (balance.siteDelta !== 0) {
-    diagnostics.push(finding('site-imbalance', step.source, `step ${step.id} changes the number of surface sites by ${signed(balance.siteDelta)}`, { found: signed(balance.siteDelta), expected: ['0'] }));
+    diagnostics.push(finding('site-imbalance', step, `step ${step.id} changes the number of surface sites by ${signed(balance.siteDelta)}`, { found: signed(balance.siteDelta), expected: ['0'] }));
   }
 }
 
@@ -45,13 +45,13 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
     ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
     : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
   const fixed = fixedEquation(step, fix);
-  diagnostics.push(finding('suggested-fix', step.source, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
+  diagnostics.push(finding('suggested-fix', step, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }
 
 function reportOpaque(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
   if (balance.elementsChecked) return;
   const opaque = termsOf(step).filter((term) => term.species.opaque).map((term) => term.species.key);
-  diagnostics.push(finding('opaque-species', step.source, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
+  diagnostics.push(finding('opaque-species', step, `step ${step.id} contains the opaque name ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }
 
 /** Checks one step and builds its JSON; diagnostics go to `diagnostics`. */
@@ -65,13 +65,12 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
   checkStepRules(step, diagnostics);
   const stepClass = reportClass(step, diagnostics);
   const enthalpy = stepEnthalpy(step, lookup);
-  const source = step.source;
   // Fields written out (no spread of `balance`): this literal is built once per step of a large text.
   return {
     label: step.label,
     id: step.id,
-    line: source.line,
-    column: source.column,
+    line: step.line,
+    column: step.column,
     equation: equationText(step.reactants, step.products, step.reversible),
     normalised: normalisedStep(step),
     reversible: step.reversible,
@@ -92,6 +91,6 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     missingEnthalpies: enthalpy.missing,
     usedEnthalpies: enthalpy.used,
     // The rate as the parser read it ({ forward, reverse, line, column }): nothing changes it, so it is not copied.
-    rate: source.rate,
+    rate: step.rate,
   };
 }

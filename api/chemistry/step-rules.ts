@@ -43,21 +43,20 @@ function thirdBodyCount(terms: readonly StepTerm[]): number {
 
 /** The photon, third-body, molecularity and lumping rules of one step. */
 export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void {
-  const source = step.source;
-  const photon = source.productPhoton;
+  const photon = step.productPhoton;
   if (photon) diagnostics.push(finding('photon-on-product-side', photon, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.text }));
   const before = thirdBodyCount(step.reactants);
   const after = thirdBodyCount(step.products);
   if (before !== after || before > 1) {
     const message = `M must appear once on each side (step ${step.id} has ${before} on the left and ${after} on the right)`;
-    diagnostics.push(finding('third-body-unpaired', source, message, { found: `${before} M → ${after} M`, expected: ['M on both sides, once each'] }));
+    diagnostics.push(finding('third-body-unpaired', step, message, { found: `${before} M → ${after} M`, expected: ['M on both sides, once each'] }));
   }
   const count = molecularity(step);
-  if (count > 3) diagnostics.push(finding('molecularity-above-three', source, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
+  if (count > 3) diagnostics.push(finding('molecularity-above-three', step, `step ${step.id} has ${count} reactant particles; an elementary step has at most 3`));
   if (step.wholeCoefficients) return;
   const lumped = termsOf(step).filter((term) => !term.fraction.isInteger());
   const listed = lumped.map((term) => `${term.coefText} ${term.species.key}`).join(', ');
-  diagnostics.push(finding('not-elementary', source, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
+  diagnostics.push(finding('not-elementary', step, `step ${step.id} has non-integer coefficients (${listed}): a lumped step, not elementary`));
 }
 
 // The note's text, one per class and radical counts: the note sits on its step's line, so the text
@@ -88,7 +87,7 @@ function classNote(stepClass: StepClass, before: number, after: number): string 
 export function reportClass(step: StepModel, diagnostics: Diagnostic[]): StepClass {
   const { stepClass, before, after } = classify(step);
   if (stepClass === 'initiation' || stepClass === 'branching' || stepClass === 'termination') {
-    diagnostics.push(finding('step-class', step.source, classNote(stepClass, before, after)));
+    diagnostics.push(finding('step-class', step, classNote(stepClass, before, after)));
   }
   return stepClass;
 }

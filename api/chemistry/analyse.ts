@@ -48,10 +48,10 @@ function readMechanism(text: string, lookup: EnthalpyLookup) {
 }
 
 /**
- * Without %species declarations every species resolves on its own, so each step is built and
- * reported as soon as its line is parsed: the trees of a large text then die young instead of all
- * being held (and copied by the collector) until the last line. The diagnostics keep the order of
- * `readMechanism`: parser, directives, then steps.
+ * Without %species declarations every species resolves on its own, so each step is built as soon
+ * as its line is parsed: the trees of a large text then die young instead of all being held (and
+ * copied by the collector) until the last line. The diagnostics keep the order of `readMechanism`:
+ * parser, directives, then steps.
  */
 function readUndeclared(text: string, lookup: EnthalpyLookup) {
   const stepDiagnostics: Diagnostic[] = [];

@@ -9,9 +9,9 @@ import type { StepTerm } from './step-model';
 import type { EnthalpyEntry } from './thermo';
 
 /**
- * A species met in the mechanism, with where it was first written. The last three fields belong
- * to this analysis only and are read on every step of a large text, so they sit on the record
- * itself rather than in lookup tables.
+ * A species met in the mechanism, with where it was first written. The fields from `order` on
+ * belong to this analysis only and are read on every step of a large text, so they sit on the
+ * record itself rather than in lookup tables.
  */
 export interface RegisteredSpecies extends SpeciesInfo {
   firstLine: number;

@@ -94,6 +94,7 @@ function readSide(terms: readonly TermNode[], registry: SpeciesRegistry, diagnos
   return readable;
 }
 
+/** Empties the lists above (their count only: a step's build starts here, whatever the last one left). */
 function forgetRead(): void {
   readSpecies.clear();
   readCoefs.clear();
@@ -209,12 +210,10 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
   if (!left || !right) return null;
   const reactants = mergeSide(0, split, registry);
   const products = mergeSide(split, readSpecies.size, registry);
-  forgetRead();
   markFormedAndConsumed(reactants, products, node.reversible);
   const label = node.label?.text ?? null;
   const photon = findPhoton(node.products);
   const productPhoton = photon ? { line: photon.line, column: photon.column, text: photon.text } : null;
-
   const wholeCoefficients = allWhole(reactants) && allWhole(products);
   return {
     index: -1,

@@ -11,7 +11,6 @@ import { suggestFix, type BalancingFix } from './suggest-fix';
 import type { SpeciesInfo } from './species-model';
 import type { EnthalpyLookup } from './thermo';
 
-
 function signed(value: number): string {
   return value > 0 ? `+${value}` : String(value);
 }

@@ -117,6 +117,8 @@ function reportBlank(text: string, start: number, context: LineContext): void {
  * node apart from where it was written, and a mechanism repeats a few species over many steps.
  */
 export interface SpeciesShape {
+  /** The species text of the first place it was written, which every later place shares. */
+  text: string;
   formulaText: string;
   formula: readonly FormulaPart[];
   states: readonly string[];
@@ -139,8 +141,8 @@ function speciesSpan(raw: RawSpecies, context: LineContext): { start: number; en
   return { start, end: partEnd(raw.formula.head, context) };
 }
 
-function fromShape(shape: SpeciesShape, text: string, start: number, context: LineContext): SpeciesNode {
-  const { formulaText, formula, states, radicalMarks, charge, sites } = shape;
+function fromShape(shape: SpeciesShape, start: number, context: LineContext): SpeciesNode {
+  const { text, formulaText, formula, states, radicalMarks, charge, sites } = shape;
   const chargeToken = charge ? { text: charge.text, line: context.line, column: start + 1 + charge.offset } : null;
   return { kind: 'species', text, formulaText, formula, states, radicalMarks, charge: chargeToken, sites, line: context.line, column: start + 1 };
 }
@@ -149,14 +151,16 @@ function fromShape(shape: SpeciesShape, text: string, start: number, context: Li
 export function convertSpecies(raw: RawSpecies, context: LineContext): SpeciesNode {
   const span = speciesSpan(raw, context);
   const text = context.text.slice(span.start, span.end);
+  // The node takes the shape's copy of the text: later lookups by the same string object (the
+  // species registry's) then match it without comparing characters, and this slice dies young.
   const shape = context.shapes.get(text);
-  if (shape) return fromShape(shape, text, span.start, context);
+  if (shape) return fromShape(shape, span.start, context);
   const findings = context.diagnostics.length;
   const node = convertNewSpecies(raw, context);
   if (context.diagnostics.length === findings) {
     const { formulaText, formula, states, radicalMarks, sites } = node;
     const charge = node.charge ? { text: node.charge.text, offset: node.charge.column - node.column } : null;
-    context.shapes.set(text, { formulaText, formula, states, radicalMarks, charge, sites });
+    context.shapes.set(node.text, { text: node.text, formulaText, formula, states, radicalMarks, charge, sites });
   }
   return node;
 }

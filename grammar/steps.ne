@@ -66,14 +66,17 @@ const baseLexer = moo.states({
   },
 });
 
-const SKIPPED = new Set(['ws', 'comment']);
+/** Blanks and comments, which the grammar never sees (two comparisons: this runs for every token). */
+function skipped(token: moo.Token): boolean {
+  return token.type === 'ws' || token.type === 'comment';
+}
 
 /** The moo lexer without blanks and comments: whitespace is checked inside species by parse.ts. */
 export const lexer = {
   reset: (chunk: string, state?: moo.LexerState) => baseLexer.reset(chunk, state),
   next: (): moo.Token | undefined => {
     let token = baseLexer.next();
-    while (token && SKIPPED.has(token.type ?? '')) token = baseLexer.next();
+    while (token && skipped(token)) token = baseLexer.next();
     return token;
   },
   save: () => baseLexer.save(),

@@ -29,6 +29,8 @@ export interface RegisteredSpecies extends SpeciesInfo {
   formed: boolean;
   /** ΔfH° of the species for this analysis' lookup; undefined until asked (enthalpy.ts). */
   enthalpy: EnthalpyEntry | null | undefined;
+  /** Already named among the species without an enthalpy (missing-enthalpies.ts). */
+  enthalpyMissingNoted: boolean;
 }
 
 /**
@@ -60,6 +62,7 @@ function listed(info: SpeciesInfo, node: ParticleNode, order: number): Registere
     consumed: false,
     formed: false,
     enthalpy: undefined,
+    enthalpyMissingNoted: false,
   };
 }
 

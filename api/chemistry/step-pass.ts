@@ -45,7 +45,7 @@ export class StepPass {
       const json = reportStep(step, this.lookup, candidates, this.diagnostics);
       this.json.push(json);
       this.duplicates.add(step, json.normalised);
-      this.missingEnthalpies.note(json);
+      this.missingEnthalpies.note(step, json);
     }
   }
 }

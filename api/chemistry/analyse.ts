@@ -6,6 +6,7 @@ import { cachedLookup, enthalpyOf } from './enthalpy';
 import { formedAndConsumedKeys } from './formed-and-consumed';
 import { readDirectives, type MechanismSettings } from './directives';
 import { reportRadicalMarks } from './radical-marks';
+import { reportRates } from './rate-check';
 import { analyseRoutes, type RouteAnalysis } from './route-report';
 import { assignRoles } from './roles';
 import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
@@ -100,6 +101,7 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
   const species = registry.all();
   reportRadicalMarks(species, diagnostics);
   pass.missingEnthalpies.report(diagnostics);
+  reportRates(steps, text, diagnostics);
   const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
   const routes = steps.length > 0
     ? routesOrNote(steps, stepJson, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)

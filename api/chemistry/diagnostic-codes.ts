@@ -42,6 +42,9 @@ export const DIAGNOSTIC_CODES = {
   'direct-routes-limit': { severity: 'warning', meaning: 'direct-route enumeration stopped at its work limit' },
   'no-productive-route': { severity: 'info', meaning: 'the routes are null cycles only' },
   'enthalpy-missing': { severity: 'info', meaning: 'species without an enthalpy of formation' },
+  'rate-expression': { severity: 'error', meaning: 'a rate expression that cannot be evaluated (syntax, or a name or function not allowed)' },
+  'rate-count': { severity: 'warning', meaning: 'a reversible step with one rate, or a one-way step with two' },
+  'rates-unchecked': { severity: 'info', meaning: 'too many steps to compile every rate expression while checking' },
 } as const satisfies Record<string, CodeInfo>;
 
 export type DiagnosticCode = keyof typeof DIAGNOSTIC_CODES;

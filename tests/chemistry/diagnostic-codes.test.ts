@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMechanism, MAX_ROUTE_ANALYSIS_STEPS } from '@api/chemistry/analyse';
 import { DIAGNOSTIC_CODES, type DiagnosticCode } from '@api/chemistry/diagnostic-codes';
+import { MAX_RATE_CHECK_STEPS } from '@api/chemistry/rate-check';
 import { generateMechanism } from '../../examples/generate-large';
 
 /** Thirty steps with three parallel ways from each carbon cluster to the next: 3^10 direct routes. */
@@ -44,6 +45,10 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'direct-routes-limit': { text: explodingMechanism, line: 1, column: 1 },
   'no-productive-route': { text: '%intermediates O3, O2, O(3P)\nO3 + hν -> O2 + O(3P)\nO(3P) + O2 + M -> O3 + M', line: 2, column: 1 },
   'enthalpy-missing': { text: 'CO + * -> CO*', line: 1, column: 1 },
+  // `exp(` is never closed: mathjs finds the end of the expression at its 15th character.
+  'rate-expression': { text: 'R1: CH4 + OH• -> CH3• + H2O @ 6.4e-15 * exp(', line: 1, column: 45 },
+  'rate-count': { text: 'N2O4 <=> 2 NO2• @ 1.0e5', line: 1, column: 17 },
+  'rates-unchecked': { text: () => generateMechanism(MAX_RATE_CHECK_STEPS + 1), line: 3, column: 1 },
 };
 
 describe('DIAGNOSTIC_CODES', () => {

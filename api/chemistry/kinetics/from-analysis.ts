@@ -3,6 +3,7 @@ import type { Composition } from './analysis/element-drift';
 import type { Conditions, KineticModel, KineticsDiagnostic, KineticStep, SpeciesTerm, TextPosition } from './model';
 import type { RouteInput } from './simulation-types';
 import type { ConcentrationUnit } from './units';
+import { ratePositions } from '../rate-positions';
 
 /** Everything a simulation needs from a mechanism analysis, besides the user's run settings. */
 export interface KineticsSetup {
@@ -23,22 +24,6 @@ const UNITS: ConcentrationUnit[] = ['molecule cm^-3', 'mol L^-1', 'mol m^-2'];
 const NOT_INTEGRATED = new Set(['photon', 'third-body']);
 
 type StepJson = MechanismAnalysis['steps'][number];
-
-/**
- * Columns of the forward and reverse rate texts. The analysis gives the column of `@`; with the
- * source text the expressions are found exactly (after `@`, and after `|`), otherwise both point
- * at the `@`.
- */
-function ratePositions(rate: { forward: string; reverse: string | null; line: number; column: number }, lines: string[] | null): { forwardAt: TextPosition; reverseAt: TextPosition } {
-  const at = { line: rate.line, column: rate.column };
-  const line = lines?.[rate.line - 1];
-  if (!line) return { forwardAt: at, reverseAt: at };
-  const afterAt = rate.column;
-  const forwardColumn = line.indexOf(rate.forward, afterAt) + 1;
-  const bar = rate.reverse === null ? -1 : line.indexOf('|', forwardColumn - 1 + rate.forward.length);
-  const reverseColumn = bar < 0 || rate.reverse === null ? forwardColumn : line.indexOf(rate.reverse, bar) + 1;
-  return { forwardAt: { line: rate.line, column: forwardColumn || rate.column }, reverseAt: { line: rate.line, column: reverseColumn || rate.column } };
-}
 
 function termsOf(terms: StepJson['reactants'], index: Map<string, number>): SpeciesTerm[] {
   return terms.flatMap((term) => (index.has(term.key) ? [{ index: index.get(term.key)!, coef: term.coef }] : []));

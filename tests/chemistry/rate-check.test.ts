@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import { MAX_RATE_CHECK_STEPS } from '@api/chemistry/rate-check';
+import { generateMechanism } from '../../examples/generate-large';
+
+function rateFindings(text: string) {
+  return analyseMechanism(text).diagnostics.filter((item) => item.code.startsWith('rate'));
+}
+
+describe('rates after @ are checked with the steps', () => {
+  it('accepts the expressions the simulator evaluates, falloff included, and says nothing', () => {
+    const text = [
+      'B1: Br• + O3 -> BrO• + O2  @ 1.7e-11 * exp(-800 / T)',
+      'B2: BrO• + hν -> Br• + O(3P)  @ 0.035',
+      'B3: O(3P) + O2 + M -> O3 + M  @ 6.0e-34 * (T / 300)^-2.4',
+      'B4: Br• + NO2• + M -> BrNO2 + M  @ falloff(4.2e-31 * (T / 300)^-2.4, 2.7e-11, 0.55)',
+      'B5: Br2 <=> 2 Br•  @ 1.0e-20 | 3.0e-13 * sqrt(T)',
+    ].join('\n');
+    expect(rateFindings(text)).toEqual([]);
+  });
+
+  it('places a syntax error in the forward rate at the column where it goes wrong', () => {
+    const [finding] = rateFindings('B1: Br• + O3 -> BrO• + O2 @ 1.7e-11 * exp(-800 / T))');
+    // "B1: Br• + O3 -> BrO• + O2 @ " is 28 characters, so the rate starts in column 29.
+    expect(finding).toMatchObject({ code: 'rate-expression', severity: 'error', line: 1 });
+    expect(finding.column).toBeGreaterThan(29);
+    expect(finding.message).toContain('forward rate of step B1');
+  });
+
+  it('places an error in the reverse rate after the bar', () => {
+    const line = 'E1: Br2 <=> 2 Br• @ 1.0e-20 | 3.0e-13 * cosh(T)';
+    const [finding] = rateFindings(line);
+    expect(finding).toMatchObject({ code: 'rate-expression', line: 1, column: line.indexOf('cosh') + 1 });
+    expect(finding.message).toMatch(/reverse rate of step E1 .*"cosh" is not allowed/);
+  });
+
+  it('refuses names other than T, P and M, and an empty forward rate', () => {
+    const unknownName = rateFindings('O3 + hν -> O2 + O(3P) @ Jmax * 0.5');
+    expect(unknownName.map((item) => item.code)).toEqual(['rate-expression']);
+    const empty = rateFindings('R2: O3 -> O2 + O(3P) @ | 1');
+    expect(empty.map((item) => item.code).sort()).toEqual(['rate-count', 'rate-expression']);
+  });
+
+  it('warns when a reversible step gives one rate and a one-way step two', () => {
+    const oneRate = rateFindings('N2O4 <=> 2 NO2• @ 1.0e5');
+    expect(oneRate).toMatchObject([{ code: 'rate-count', severity: 'warning', line: 1 }]);
+    expect(oneRate[0].message).toContain('reversible but gives one rate');
+    const twoRates = rateFindings('NO• + O3 -> NO2• + O2 @ 1.8e-14 | 1.0e-30');
+    expect(twoRates).toMatchObject([{ code: 'rate-count', severity: 'warning' }]);
+    expect(twoRates[0].message).toContain('reverse rate 1.0e-30 is never used');
+  });
+
+  it('leaves the expressions of a very large mechanism to the simulator and says so once', () => {
+    const text = `${generateMechanism(MAX_RATE_CHECK_STEPS + 1)}X1: O3 -> O2 + O(3P) @ exp(\n`;
+    const findings = rateFindings(text);
+    expect(findings.map((item) => item.code)).toEqual(['rates-unchecked']);
+  });
+});

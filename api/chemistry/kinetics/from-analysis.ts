@@ -1,6 +1,6 @@
 import type { MechanismAnalysis } from '../analysis-types';
 import type { Composition } from './analysis/element-drift';
-import type { Conditions, KineticModel, KineticsDiagnostic, KineticStep, SpeciesTerm, TextPosition } from './model';
+import type { Conditions, KineticModel, KineticsDiagnostic, KineticStep, SpeciesTerm } from './model';
 import type { RouteInput } from './simulation-types';
 import type { ConcentrationUnit } from './units';
 import { ratePositions } from '../rate-positions';

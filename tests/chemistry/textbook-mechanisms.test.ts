@@ -98,4 +98,17 @@ describe('textbook mechanisms: net reactions, stoichiometric numbers and roles',
     expect(analysis.routes[0].dH).toBeCloseTo(-285.3, 1);
     expect(roles(analysis)).toMatchObject({ 'Br•': 'catalyst', 'BrO•': 'intermediate', Br2: 'unused' });
   });
+
+  // Step classes by radical count. In catalytic ozone loss the atom O(3P), written without marks, is
+  // odd oxygen and not a chain carrier: ClO + O → Cl + O2 propagates the chlorine chain
+  // (Finlayson-Pitts & Pitts, ch. 12, from memory). In hydrogen–oxygen combustion the author marks
+  // the triplet atom's two unpaired electrons, and H + O2 → OH + O and O + H2 → OH + H branch the
+  // chain while OH + H2 → H2O + H propagates it (Warnatz, Maas & Dibble, Combustion, ch. 5; from memory).
+  it('step classes: the chlorine cycle propagates; marked O(3P)•• makes the hydrogen–oxygen steps branch', () => {
+    const chlorine = analyseMechanism('K1: Cl• + O3 -> ClO• + O2\nK2: ClO• + O(3P) -> Cl• + O2');
+    expect(chlorine.steps.map((step) => step.class)).toEqual(['propagation', 'propagation']);
+    const combustion = analyseMechanism('H1: H• + O2 -> OH• + O(3P)••\nH2: O(3P)•• + H2 -> OH• + H•\nH3: OH• + H2 -> H2O + H•');
+    expect(combustion.steps.map((step) => step.class)).toEqual(['branching', 'branching', 'propagation']);
+    expect(combustion.diagnostics.filter((item) => item.severity !== 'info')).toEqual([]);
+  });
 });

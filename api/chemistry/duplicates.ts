@@ -16,9 +16,10 @@ export class DuplicateSteps {
   constructor(private readonly diagnostics: Diagnostic[]) {}
 
   add(step: StepModel, normalised: string): void {
-    if (step.label && step.labelToken) {
+    if (step.label) {
+      // A labelled step starts at its label, so the step's place is the label's.
       const first = this.labels.get(step.label);
-      if (first) this.diagnostics.push(finding('duplicate-label', step.labelToken, `label ${step.label} is already used on line ${first.line}`, { found: step.label }));
+      if (first) this.diagnostics.push(finding('duplicate-label', step, `label ${step.label} is already used on line ${first.line}`, { found: step.label }));
       else this.labels.set(step.label, step);
     }
     const reverse = step.reversible ? normalisedText(step.products, step.reactants, true) : null;

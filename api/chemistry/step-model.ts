@@ -1,5 +1,5 @@
 import type { TermJson } from './analysis-types';
-import type { ParticleNode, RateNode, SourceToken, StepNode, TermNode } from '@grammar/ast';
+import type { ParticleNode, RateNode, StepNode, TermNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { termText } from './equation-format';
@@ -37,10 +37,9 @@ export interface StepModel {
   /** The label, or `#n` for the n-th step when it has none. */
   id: string;
   label: string | null;
+  /** Where the step starts: at its label when it has one. */
   line: number;
   column: number;
-  /** Where the label was written. */
-  labelToken: SourceToken | null;
   rate: RateNode | null;
   /** The first hν written among the products (a mistake reported by the step rules). */
   productPhoton: { line: number; column: number; text: string } | null;
@@ -221,7 +220,6 @@ export function buildStep(node: StepNode, position: number, registry: SpeciesReg
     label,
     line: node.line,
     column: node.column,
-    labelToken: node.label,
     rate: node.rate,
     productPhoton,
     reversible: node.reversible,

@@ -10,8 +10,22 @@ function stepLine(step: StepJson): string {
   return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${step.molecularity}, ${kj(step.dH)}${threshold}`;
 }
 
+/** `1×R1 − 2×R3 + 1×R4`: a step run backwards (σ < 0) is subtracted rather than added. */
+function routeSum(multipliers: Record<string, number>): string {
+  return Object.entries(multipliers)
+    .map(([id, value], index) => {
+      const sign = value < 0 ? '− ' : '+ ';
+      return `${index === 0 ? (value < 0 ? '−' : '') : sign}${Math.abs(value)}×${id}`;
+    })
+    .join(' ');
+}
+
+function plural(count: number, word: string): string {
+  return `${count} ${word}${count === 1 ? '' : 's'}`;
+}
+
 function routeLine(route: RouteJson, index: number, overall: number | null): string {
-  const numbers = Object.entries(route.multipliers).map(([id, value]) => `${value}×${id}`).join(' + ');
+  const numbers = routeSum(route.multipliers);
   const tags = [route.kind, route.direct ? 'direct' : null, index === overall ? 'overall' : null].filter(Boolean).join(', ');
   const aside = Object.entries(route.aside).map(([key, value]) => `${value} ${key}`).join(', ');
   return `  ${index + 1}. ${numbers}\n     net: ${route.net}${aside ? ` (aside: ${aside})` : ''}; ${kj(route.dH)} [${tags}]`;
@@ -27,7 +41,7 @@ export function formatReport(analysis: MechanismAnalysis, fileName: string): str
   lines.push(`Roles: ${roles.join('; ')}`, '');
   const counts = { error: 0, warning: 0, info: 0 };
   for (const item of analysis.diagnostics) counts[item.severity] += 1;
-  lines.push(`Diagnostics: ${counts.error} errors, ${counts.warning} warnings, ${counts.info} notes`);
+  lines.push(`Diagnostics: ${plural(counts.error, 'error')}, ${plural(counts.warning, 'warning')}, ${plural(counts.info, 'note')}`);
   for (const item of analysis.diagnostics) lines.push(`  ${fileName}:${item.line}:${item.column} ${item.severity} [${item.code}] ${item.message}`);
   return lines.join('\n');
 }

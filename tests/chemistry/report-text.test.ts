@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
+import { formatReport } from '@api/chemistry/report-text';
+
+describe('the readable report of check', () => {
+  // H2 + Cl2 chain with every step reversible: routes may run a step backwards (σ < 0), which the
+  // report writes as a subtraction. Net H2 + Cl2 → 2 HCl (common practice).
+  const text = [
+    'R1: Cl2 <=> 2 Cl• @ 1 | 1',
+    'R2: Cl• + H2 <=> HCl + H• @ 1 | 1',
+    'R3: H• + Cl2 <=> HCl + Cl• @ 1 | 1',
+    'R4: H• + HCl <=> H2 + Cl• @ 1 | 1',
+  ].join('\n');
+
+  it('writes a step run backwards as a subtraction, never as "+ -"', () => {
+    const report = formatReport(analyseMechanism(text), 'chain.steps');
+    const sums = report.split('\n').filter((line) => /^ {2}\d+\. /.test(line));
+    expect(sums.length).toBeGreaterThan(0);
+    for (const line of sums) expect(line).not.toMatch(/\+ -|\+ −/);
+    const analysis = analyseMechanism(text);
+    const backwards = analysis.routes.findIndex((route) => Object.values(route.multipliers).some((value) => value < 0));
+    expect(backwards).toBeGreaterThanOrEqual(0); // R3 − R4 is one such route
+    expect(sums[backwards]).toMatch(/ − \d+×R\d/);
+  });
+
+  it('counts the findings in the singular and plural', () => {
+    const report = formatReport(analyseMechanism('Br2 + hν -> 2 Br•'), 'one.steps');
+    expect(report).toContain('Diagnostics: 0 errors, 0 warnings, 1 note');
+  });
+});

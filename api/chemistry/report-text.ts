@@ -4,10 +4,15 @@ function kj(value: number | null): string {
   return value === null ? 'ΔH unknown' : `ΔH = ${value.toFixed(1)} kJ/mol`;
 }
 
+/** A lumped step's molecularity (a sum of fractions) to three decimals: `0.333`, not `0.3333333333333333`. */
+function molecularityText(value: number): string {
+  return Number.isInteger(value) ? String(value) : String(Number(value.toFixed(3)));
+}
+
 function stepLine(step: StepJson): string {
   const balance = step.balanced ? 'balanced' : 'NOT balanced';
   const threshold = step.thresholdNm !== null ? `, λ < ${step.thresholdNm.toFixed(0)} nm` : '';
-  return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${step.molecularity}, ${kj(step.dH)}${threshold}`;
+  return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${molecularityText(step.molecularity)}, ${kj(step.dH)}${threshold}`;
 }
 
 /** `1×R1 − 2×R3 + 1×R4`: a step run backwards (σ < 0) is subtracted rather than added. */

@@ -27,4 +27,9 @@ describe('the readable report of check', () => {
     const report = formatReport(analyseMechanism('Br2 + hν -> 2 Br•'), 'one.steps');
     expect(report).toContain('Diagnostics: 0 errors, 0 warnings, 1 note');
   });
+
+  it('writes the molecularity of a lumped step to three decimals', () => {
+    const report = formatReport(analyseMechanism('L1: 1/3 O3 -> 1/2 O2'), 'lumped.steps');
+    expect(report).toContain('molecularity 0.333,');
+  });
 });

@@ -6,6 +6,9 @@ interface ParseTable {
   table: { states: { rule: { symbols: unknown[] }; dot: number }[] }[];
 }
 
+// At the start of a line every directive is possible: one entry names them all.
+const ANY_DIRECTIVE = 'a directive (%title, %units, %conditions, %terminal, %intermediates, %species)';
+
 const TOKEN_NAMES: Record<string, string> = {
   label: 'a label',
   colon: "':'",
@@ -31,6 +34,10 @@ const TOKEN_NAMES: Record<string, string> = {
   bar: "'|'",
   text: 'a title',
   value: 'a value',
+  titleDirective: ANY_DIRECTIVE,
+  assignDirective: ANY_DIRECTIVE,
+  listDirective: ANY_DIRECTIVE,
+  speciesDirective: ANY_DIRECTIVE,
 };
 
 /** Token kinds the parser could have accepted at table column `index`, in plain words. */

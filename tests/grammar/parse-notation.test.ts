@@ -136,6 +136,13 @@ describe('parseMechanism: rejected notation', () => {
     expect(error.expected).toEqual(expect.arrayContaining(['a formula or declared name', 'hν', 'M', "'*'"]));
   });
 
+  it('names what it expected in plain words, never a token type of the lexer', () => {
+    const [error] = parseMechanism('-> O2').diagnostics;
+    expect(error).toMatchObject({ column: 1, found: '->' });
+    expect(error.expected).toContain('a directive (%title, %units, %conditions, %terminal, %intermediates, %species)');
+    for (const item of error.expected ?? []) expect(item).not.toMatch(/^[a-z]+[A-Z][A-Za-z]*$/);
+  });
+
   it('reports a line that is too long without reading it', () => {
     const [error] = parseMechanism(`A -> B @ ${'1+'.repeat(2_000)}1`).diagnostics;
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });

@@ -83,9 +83,17 @@ function parseLine(context: LineContext, parsed: ParsedMechanism, onStep: StepSi
   }
   const raw = runGrammar(context);
   if (!raw) return;
-  if (raw.kind !== 'step') parsed.directives.push(convertDirective(raw, context));
-  else if (onStep) onStep(convertStep(raw, context));
-  else parsed.steps.push(convertStep(raw, context));
+  if (raw.kind !== 'step') {
+    parsed.directives.push(convertDirective(raw, context));
+    return;
+  }
+  // A species written with a blank, two charges or two adsorbed marks is a syntax error found
+  // while converting: such a line is reported, not analysed, like any other faulty line.
+  const findings = context.diagnostics.length;
+  const step = convertStep(raw, context);
+  if (context.diagnostics.length > findings) return;
+  if (onStep) onStep(step);
+  else parsed.steps.push(step);
 }
 
 function directiveIsKnown(context: LineContext): boolean {

@@ -130,6 +130,12 @@ describe('parseMechanism: rejected notation', () => {
     expect(diagnostics[0].found).toBeTruthy();
   });
 
+  it('reports a line with a species error found while converting, and does not hand on its step', () => {
+    const parsed = parseMechanism('C H3 + O -> X\nO3 -> O2 + O(3P)\nFe^2+^3+ -> Fe^3+ + e^-');
+    expect(parsed.diagnostics.map((item) => item.line)).toEqual([1, 3]);
+    expect(parsed.steps.map((step) => step.line)).toEqual([2]);
+  });
+
   it('says what it expected at a syntax error', () => {
     const [error] = parseMechanism('A + -> B').diagnostics;
     expect(error).toMatchObject({ column: 5, found: '->' });

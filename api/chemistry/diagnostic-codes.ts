@@ -23,6 +23,7 @@ export const DIAGNOSTIC_CODES = {
   'bad-declaration': { severity: 'error', meaning: 'a %species declaration that repeats or shadows a name' },
   'opaque-species': { severity: 'info', meaning: 'a step with an opaque declared species is not element-balanced' },
   'unused-directive-species': { severity: 'warning', meaning: '%terminal or %intermediates names a species no step uses' },
+  'intermediate-one-sided': { severity: 'warning', meaning: '%intermediates names a species that is only formed or only consumed' },
   'element-imbalance': { severity: 'error', meaning: 'an element is not conserved by a step' },
   'charge-imbalance': { severity: 'error', meaning: 'charge is not conserved by a step' },
   'site-imbalance': { severity: 'error', meaning: 'surface sites are not conserved by a step' },

@@ -25,6 +25,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'undeclared-name': { text: 'Enz + O2 -> EnzO2', line: 1, column: 1 },
   'bad-declaration': { text: '%species CO = CO', line: 1, column: 10 },
   'opaque-species': { text: '%species Enz\nEnz + O2 -> Enz + O2', line: 2, column: 1 },
+  'intermediate-one-sided': { text: '%intermediates O(1D), O3\nO3 + hν -> O2 + O(1D)\nO(1D) + H2O -> 2 OH•', line: 1, column: 23 },
   'unused-directive-species': { text: '%terminal N2\nO3 + hν -> O2 + O(3P)', line: 1, column: 11 },
   'element-imbalance': { text: 'X1: 2 O3 -> 2 O2', line: 1, column: 1 },
   'charge-imbalance': { text: 'Fe^3+ + e^- -> Fe^+', line: 1, column: 1 },

@@ -35,4 +35,12 @@ describe('choice of intermediates', () => {
     expect(analysis.intermediates).toEqual(['O(3P)']);
     expect(analysis.routes).toContainEqual(expect.objectContaining({ multipliers: { C1: 1, C2: 2 }, net: '3 O2 → 2 O3' }));
   });
+
+  it('warns when %intermediates names a species that is only formed or only consumed, placed at its spelling', () => {
+    const text = '%intermediates Br., O3\nB1: Br• + O3 -> BrO• + O2\nB2: BrO• + BrO• -> 2 Br• + O2';
+    const oneSided = analyseMechanism(text).diagnostics.filter((item) => item.code === 'intermediate-one-sided');
+    // Br• (written Br.) is formed and consumed; O3 is only consumed.
+    expect(oneSided).toEqual([expect.objectContaining({ severity: 'warning', line: 1, column: 21, found: 'O3' })]);
+    expect(oneSided[0].message).toContain('which no step forms');
+  });
 });

@@ -30,7 +30,9 @@ function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Dia
 
 function fixedEquation(step: StepModel, fix: BalancingFix): string {
   const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
-    const list: ShownTerm[] = terms.map((term) => (fix.kind === 'coefficient' && fix.side === name && term.key === fix.key ? { key: term.key, coef: fix.to } : term));
+    const touched = (term: StepTerm) => fix.side === name && term.key === fix.key;
+    const kept = fix.kind === 'remove' ? terms.filter((term) => !touched(term)) : terms;
+    const list: ShownTerm[] = kept.map((term) => (fix.kind === 'coefficient' && touched(term) ? { key: term.key, coef: fix.to } : term));
     if (fix.kind === 'add' && fix.side === name) list.push({ key: fix.key, coef: fix.coef });
     return list;
   };
@@ -42,7 +44,9 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
   if (!fix) return;
   const change = fix.kind === 'coefficient'
     ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
-    : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
+    : fix.kind === 'remove'
+      ? `${fix.coef.toString()} ${fix.key} removed from the ${fix.side}`
+      : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
   const fixed = fixedEquation(step, fix);
   diagnostics.push(finding('suggested-fix', step, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }

@@ -2,9 +2,10 @@ import { Fraction } from './fraction';
 import type { SpeciesInfo } from './species-model';
 import type { StepModel, StepTerm } from './step-model';
 
-/** A change that balances a step: a new coefficient for one term, or an added species. */
+/** A change that balances a step: a new coefficient for one term, a term removed, or an added species. */
 export type BalancingFix =
   | { kind: 'coefficient'; side: 'reactants' | 'products'; key: string; from: Fraction; to: Fraction }
+  | { kind: 'remove'; side: 'reactants' | 'products'; key: string; coef: Fraction }
   | { kind: 'add'; side: 'reactants' | 'products'; key: string; coef: Fraction };
 
 type Vector = Map<string, Fraction>;
@@ -85,17 +86,25 @@ function coefficientFixes(step: StepModel, diff: Vector): BalancingFix[] {
       const delta = multipleOf(target, composition(term.species));
       const to = delta ? term.fraction.add(delta) : null;
       if (to && to.sign() > 0) fixes.push({ kind: 'coefficient', side, key: term.species.key, from: term.fraction, to });
+      else if (to && to.isZero()) fixes.push({ kind: 'remove', side, key: term.species.key, coef: term.fraction });
     }
   }
   return fixes;
 }
 
-function additionFixes(diff: Vector, candidates: readonly Candidate[]): BalancingFix[] {
+/**
+ * Species added to one side. A species already on the other side is never added (`A + e^- → B +
+ * e^-` is no fix): changing or removing its term there is the fix, and coefficientFixes offers it.
+ */
+function additionFixes(step: StepModel, diff: Vector, candidates: readonly Candidate[]): BalancingFix[] {
   const fixes: BalancingFix[] = [];
   for (const candidate of candidates) {
     const k = multipleOf(diff, composition(candidate));
     if (!k || k.isZero()) continue;
-    fixes.push(k.sign() > 0 ? { kind: 'add', side: 'reactants', key: candidate.key, coef: k } : { kind: 'add', side: 'products', key: candidate.key, coef: k.neg() });
+    const side = k.sign() > 0 ? 'reactants' : 'products';
+    const opposite = side === 'reactants' ? step.products : step.reactants;
+    if (opposite.some((term) => term.species.key === candidate.key)) continue;
+    fixes.push({ kind: 'add', side, key: candidate.key, coef: k.sign() > 0 ? k : k.neg() });
   }
   return fixes;
 }
@@ -105,14 +114,14 @@ function wholeNumbers(fix: BalancingFix): boolean {
 }
 
 /**
- * A small change that balances an unbalanced step: a new coefficient for one of its terms, else
- * one added species (the mechanism's own species first, then common small ones). Whole-number
+ * A small change that balances an unbalanced step: a new coefficient for one of its terms (or the
+ * term removed), else one added species (the mechanism's own species first, then common small ones). Whole-number
  * changes are preferred. Null when no such change balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);
   if (diff.size === 0) return null;
   const usable = [...mechanismSpecies, ...COMMON_SMALL_SPECIES].filter((c) => !c.opaque && c.kind !== 'photon' && c.kind !== 'third-body');
-  const fixes = [...coefficientFixes(step, diff), ...additionFixes(diff, usable)];
+  const fixes = [...coefficientFixes(step, diff), ...additionFixes(step, diff, usable)];
   return fixes.find(wholeNumbers) ?? fixes[0] ?? null;
 }

@@ -84,6 +84,15 @@ describe('step checks', () => {
     expect(fixes('C6H12O6 -> Xe')).toEqual([]);
   });
 
+  it('removes a stray term rather than writing the same species on both sides', () => {
+    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.message);
+    // Adding e^- to the reactants would balance the charge too, but leave e^- on both sides.
+    const [fewer] = fixes('H2O2 -> O2 + 2 H^+ + 3 e^-');
+    expect(fewer).toContain('2 e^- instead of 3 e^- among the products: H2O2 → O2 + 2 H^+ + 2 e^-');
+    const [stray] = fixes('H2O -> H2 + 1/2 O2 + e^-');
+    expect(stray).toContain('1 e^- removed from the products: H2O → H2 + 1/2 O2');
+  });
+
   it('matches a reversible step with its reverse as a duplicate', () => {
     const analysis = analyseMechanism('A1: N2O4 <=> 2 NO2•\nA2: 2 NO2• <=> N2O4');
     expect(analysis.diagnostics).toContainEqual(expect.objectContaining({ code: 'duplicate-step', line: 2 }));

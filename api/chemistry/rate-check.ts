@@ -37,6 +37,7 @@ function checkRateCount(step: StepModel, diagnostics: Diagnostic[]): void {
  * placed at the column where it goes wrong.
  */
 export function reportRates(steps: readonly StepModel[], text: string, diagnostics: Diagnostic[]): void {
+  if (steps.length === 0) return; // also: a text that was not a string has no steps
   const compile = steps.length <= MAX_RATE_CHECK_STEPS;
   const lines = compile ? text.split(/\r\n|\n|\r/) : null;
   for (const step of steps) {

@@ -55,4 +55,11 @@ describe('rates after @ are checked with the steps', () => {
     const findings = rateFindings(text);
     expect(findings.map((item) => item.code)).toEqual(['rates-unchecked']);
   });
+
+  it('never throws when the value handed in is not text (the rate pass reads the text itself)', () => {
+    for (const value of [42, null, undefined, { text: 'O3 -> O2 + O(3P) @ 1' }]) {
+      const analysis = analyseMechanism(value as unknown as string);
+      expect(analysis.diagnostics.map((item) => item.code)).toContain('input-too-large');
+    }
+  });
 });

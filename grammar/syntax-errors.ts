@@ -84,6 +84,26 @@ function bracketDiagnostic(line: number, index: number, found: string, expected:
   return diagnostic('error', PARSER_CODES.unbalancedBrackets, { line, column: index + 1 }, message, { found, expected: expectedList });
 }
 
+/**
+ * Characters and marks that look like the notation's own but are not (typed from a word processor,
+ * or copied from a paper), with what to write instead.
+ */
+const LOOK_ALIKES: Record<string, string> = {
+  '·': '•',
+  '∙': '•',
+  '⋅': '•',
+  '⟶': '→',
+  '⇒': '→',
+  '=': '->', // (not on a directive line, where `=` assigns)
+  '↔': '⇌',
+  '⇄': '⇌',
+  '⁺': '^+',
+  '⁻': '^-',
+  '¹': '1',
+  '²': '2',
+  '³': '3',
+};
+
 /** A syntax error at a token (or at the end of the line when `token` is null). */
 export function syntaxDiagnostic(
   line: number,
@@ -94,6 +114,9 @@ export function syntaxDiagnostic(
   const found = token ? (token.type === 'invalid' ? token.text[0] : token.text) : 'end of line';
   const column = token ? token.col : lineText.trimEnd().length + 1;
   const what = token?.type === 'invalid' ? `unexpected character '${found}'` : token ? `unexpected '${found}'` : 'the line ends too early';
-  const message = expected.length > 0 ? `${what}; expected ${expected.join(', ')}` : what;
+  const directiveLine = lineText.trimStart().startsWith('%');
+  const lookAlike = token && !(directiveLine && found === '=') ? LOOK_ALIKES[found] : undefined;
+  const hint = lookAlike ? ` (write '${lookAlike}' for '${found}')` : '';
+  const message = expected.length > 0 ? `${what}${hint}; expected ${expected.join(', ')}` : `${what}${hint}`;
   return diagnostic('error', PARSER_CODES.syntaxError, { line, column }, message, { found, expected });
 }

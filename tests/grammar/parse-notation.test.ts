@@ -149,6 +149,15 @@ describe('parseMechanism: rejected notation', () => {
     for (const item of error.expected ?? []) expect(item).not.toMatch(/^[a-z]+[A-Z][A-Za-z]*$/);
   });
 
+  it('says what to write for look-alike characters copied from papers', () => {
+    const message = (line: string) => parseMechanism(line).diagnostics[0]?.message ?? '';
+    expect(message('Br· + O3 -> BrO· + O2')).toContain("(write '•' for '·')");
+    expect(message('O3 ⟶ O2 + O(3P)')).toContain("(write '→' for '⟶')");
+    expect(message('Cl• + O3 = ClO• + O2')).toContain("(write '->' for '=')");
+    expect(message('O3 + hν -> O2 + O(¹D)')).toContain("(write '1' for '¹')");
+    expect(message('%conditions T == 298 K')).toBe("unexpected '='; expected a value");
+  });
+
   it('reports a line that is too long without reading it', () => {
     const [error] = parseMechanism(`A -> B @ ${'1+'.repeat(2_000)}1`).diagnostics;
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });

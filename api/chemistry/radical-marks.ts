@@ -1,6 +1,7 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { speciesKey } from './species-model';
+import { counted } from './wording';
 import type { RegisteredSpecies } from './species-registry';
 
 /**
@@ -15,7 +16,7 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
     const odd = item.electrons % 2 === 1;
     if (odd && item.radicalMarks === 0) {
       const marked = speciesKey(item.name ?? item.formula, [], 1, item.charge, item.sites);
-      const message = `${item.key} has ${item.electrons} electron${item.electrons === 1 ? '' : 's'}; mark it as a radical (${marked}) or ignore`;
+      const message = `${item.key} has ${counted(item.electrons, 'electron')}; mark it as a radical (${marked}) or ignore`;
       diagnostics.push(finding('odd-electrons-unmarked', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {
       const message = `${item.key} has ${item.electrons} electrons (even); give the state a tag, e.g. ${item.formula}(3P), or drop the mark`;

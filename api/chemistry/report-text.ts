@@ -1,4 +1,5 @@
 import type { MechanismAnalysis, RouteJson, StepJson } from './analysis-types';
+import { counted } from './wording';
 
 function kj(value: number | null): string {
   return value === null ? 'ΔH unknown' : `ΔH = ${value.toFixed(1)} kJ/mol`;
@@ -17,16 +18,10 @@ function stepLine(step: StepJson): string {
 
 /** `1×R1 − 2×R3 + 1×R4`: a step run backwards (σ < 0) is subtracted rather than added. */
 function routeSum(multipliers: Record<string, number>): string {
-  return Object.entries(multipliers)
-    .map(([id, value], index) => {
-      const sign = value < 0 ? '− ' : '+ ';
-      return `${index === 0 ? (value < 0 ? '−' : '') : sign}${Math.abs(value)}×${id}`;
-    })
-    .join(' ');
-}
-
-function plural(count: number, word: string): string {
-  return `${count} ${word}${count === 1 ? '' : 's'}`;
+  const terms = Object.entries(multipliers).map(([id, value]) => ({ sign: value < 0 ? '−' : '+', text: `${Math.abs(value)}×${id}` }));
+  const [first, ...rest] = terms;
+  if (!first) return '';
+  return [`${first.sign === '−' ? '−' : ''}${first.text}`, ...rest.map((term) => `${term.sign} ${term.text}`)].join(' ');
 }
 
 function routeLine(route: RouteJson, index: number, overall: number | null): string {
@@ -46,7 +41,7 @@ export function formatReport(analysis: MechanismAnalysis, fileName: string): str
   lines.push(`Roles: ${roles.join('; ')}`, '');
   const counts = { error: 0, warning: 0, info: 0 };
   for (const item of analysis.diagnostics) counts[item.severity] += 1;
-  lines.push(`Diagnostics: ${plural(counts.error, 'error')}, ${plural(counts.warning, 'warning')}, ${plural(counts.info, 'note')}`);
+  lines.push(`Diagnostics: ${counted(counts.error, 'error')}, ${counted(counts.warning, 'warning')}, ${counted(counts.info, 'note')}`);
   for (const item of analysis.diagnostics) lines.push(`  ${fileName}:${item.line}:${item.column} ${item.severity} [${item.code}] ${item.message}`);
   return lines.join('\n');
 }

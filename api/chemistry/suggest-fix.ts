@@ -115,8 +115,8 @@ function wholeNumbers(fix: BalancingFix): boolean {
 
 /**
  * A small change that balances an unbalanced step: a new coefficient for one of its terms (or the
- * term removed), else one added species (the mechanism's own species first, then common small ones). Whole-number
- * changes are preferred. Null when no such change balances the step.
+ * term removed), else one added species (the mechanism's own species first, then common small
+ * ones). Whole-number changes are preferred. Null when no such change balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);

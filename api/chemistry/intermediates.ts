@@ -13,11 +13,14 @@ export interface IntermediateChoice {
   productive: boolean;
 }
 
-function formedAndConsumed(stoichiometry: Stoichiometry, key: string): boolean {
+/** How a reversible step counts: both ways (analysis.md's rule), or only as written (the last resort below). */
+type Direction = 'both-ways' | 'as-written';
+
+function formedAndConsumed(stoichiometry: Stoichiometry, key: string, direction: Direction): boolean {
   let formed = false;
   let consumed = false;
   for (const [step, value] of stoichiometry.rows.get(key) ?? []) {
-    const reversible = stoichiometry.reversible[step];
+    const reversible = direction === 'both-ways' && stoichiometry.reversible[step];
     if (value.sign() > 0 || reversible) formed = true;
     if (value.sign() < 0 || reversible) consumed = true;
   }
@@ -54,16 +57,29 @@ function fromDeclared(stoichiometry: Stoichiometry, keys: string[], maxDirectSte
   return { keys, explanation, productive: hasProductiveRoute(stoichiometry, keys, maxDirectSteps) };
 }
 
-/** Species both formed and consumed (reversible steps count both ways), less the terminal ones. */
-export function formedAndConsumedSpecies(stoichiometry: Stoichiometry, species: readonly RegisteredSpecies[], terminal: ReadonlySet<string>): RegisteredSpecies[] {
-  return species.filter((s) => s.kind !== 'photon' && s.kind !== 'third-body' && !terminal.has(s.key) && formedAndConsumed(stoichiometry, s.key));
+/** Species both formed and consumed (reversible steps count both ways unless told), less the terminal ones. */
+export function formedAndConsumedSpecies(stoichiometry: Stoichiometry, species: readonly RegisteredSpecies[], terminal: ReadonlySet<string>, direction: Direction = 'both-ways'): RegisteredSpecies[] {
+  return species.filter((s) => s.kind !== 'photon' && s.kind !== 'third-body' && !terminal.has(s.key) && formedAndConsumed(stoichiometry, s.key, direction));
+}
+
+/**
+ * The last resort when no rule of analysis.md gives a productive route that cancels anything:
+ * reversible steps read in the direction they are written. In E + S ⇌ ES → EP ⇌ E + P every
+ * species is formed and consumed both ways, and S and P would both have to be released (the rules
+ * release one); read as written, S is only consumed and P only formed, which leaves E, ES and EP.
+ */
+function asWritten(stoichiometry: Stoichiometry, species: readonly RegisteredSpecies[], terminal: ReadonlySet<string>, initial: readonly string[], productive: (keys: readonly string[]) => boolean): string[] | null {
+  const keys = formedAndConsumedSpecies(stoichiometry, species, terminal, 'as-written').map((s) => s.key);
+  const same = keys.length === initial.length && keys.every((key, index) => key === initial[index]);
+  return keys.length > 0 && !same && productive(keys) ? keys : null;
 }
 
 /**
  * Chooses the intermediates: the declared ones; else every species both formed and consumed
  * (reversible steps count both ways) minus %terminal ones; if that leaves only null cycles,
  * releases closed-shell neutral species one at a time in order of first appearance; failing
- * that, keeps only the reactive species. The explanation says which rule decided.
+ * that, keeps only the reactive species, unless there are none or they give no productive route
+ * and reading reversible steps as written does. The explanation says which rule decided.
  */
 export function chooseIntermediates(
   stoichiometry: Stoichiometry,
@@ -89,6 +105,12 @@ export function chooseIntermediates(
     }
   }
   const reactive = initial.filter((s) => s.reactive).map((s) => s.key);
+  // Keeping no species cancels nothing: every step would be a route of its own.
+  const written = reactive.length > 0 && productive(reactive) ? null : asWritten(stoichiometry, species, declared.terminal, keys, productive);
+  if (written) {
+    const why = `Cancelling them leaves no productive route, releasing one closed-shell neutral species does not help and no reactive species can carry a route, so reversible steps are read in the direction they are written: the species formed and consumed that way are ${listed(written)}. Pin the choice with %terminal or %intermediates.`;
+    return { keys: written, explanation: `${base} ${why}`, productive: true };
+  }
   const why = `Cancelling them leaves no productive route, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
   return { keys: reactive, explanation: `${base} ${why}`, productive: productive(reactive) };
 }

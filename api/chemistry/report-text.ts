@@ -27,8 +27,9 @@ function routeSum(multipliers: Record<string, number>): string {
 function routeLine(route: RouteJson, index: number, overall: number | null): string {
   const numbers = routeSum(route.multipliers);
   const tags = [route.kind, route.direct ? 'direct' : null, index === overall ? 'overall' : null].filter(Boolean).join(', ');
-  const aside = Object.entries(route.aside).map(([key, value]) => `${value} ${key}`).join(', ');
-  return `  ${index + 1}. ${numbers}\n     net: ${route.net}${aside ? ` (aside: ${aside})` : ''}; ${kj(route.dH)} [${tags}]`;
+  // Photons are reactants only and M cancels, so what is left aside is the light the route absorbs.
+  const aside = Object.entries(route.aside).map(([key, value]) => `${Math.abs(value)} ${key} ${value < 0 ? 'absorbed' : 'given off'}`).join(', ');
+  return `  ${index + 1}. ${numbers}\n     net: ${route.net}${aside ? ` (${aside})` : ''}; ${kj(route.dH)} [${tags}]`;
 }
 
 /** The readable report of `check` (without --json). */

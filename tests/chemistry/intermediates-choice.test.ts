@@ -23,6 +23,23 @@ describe('choice of intermediates', () => {
     expect(analysis.intermediatesExplanation).toContain('only the reactive species');
   });
 
+  // Michaelis-Menten scheme with a reversible product release: Atkins' Physical Chemistry, "Enzymes" (from memory).
+  it('reads reversible steps as written when nothing else cancels any species (E + S ⇌ ES → EP ⇌ E + P)', () => {
+    const declarations = '%species E\n%species ES\n%species EP\n%species Sub = C6H12O6\n%species Prod = C6H12O6\n';
+    const analysis = analyseMechanism(`${declarations}M1: E + Sub <=> ES\nM2: ES -> EP\nM3: EP <=> E + Prod`);
+    expect(analysis.intermediates).toEqual(['E', 'ES', 'EP']);
+    expect(analysis.intermediatesExplanation).toContain('read in the direction they are written');
+    expect(analysis.routes).toEqual([expect.objectContaining({ multipliers: { M1: 1, M2: 1, M3: 1 }, net: 'Sub → Prod', kind: 'productive' })]);
+    const roles = Object.fromEntries(analysis.species.map((item) => [item.key, item.role]));
+    expect(roles).toMatchObject({ E: 'catalyst', ES: 'intermediate', EP: 'intermediate', Sub: 'reactant', Prod: 'product' });
+  });
+
+  it('keeps the reactive species, not the written direction, when they carry a route', () => {
+    const analysis = analyseMechanism('R1: Br2 <=> 2 Br•\nR2: Br• + H2 <=> HBr + H•\nR3: H• + Br2 -> HBr + Br•');
+    expect(analysis.intermediates).toEqual(['Br•', 'H•']);
+    expect(analysis.intermediatesExplanation).toContain('only the reactive species');
+  });
+
   it('follows %intermediates when given', () => {
     const analysis = analyseMechanism(`%intermediates Br•\n${exampleText('hydrogen-bromine-chain.steps')}`);
     expect(analysis.intermediates).toEqual(['Br•']);

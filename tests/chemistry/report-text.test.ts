@@ -23,6 +23,13 @@ describe('the readable report of check', () => {
     expect(sums[backwards]).toMatch(/ − \d+×R\d/);
   });
 
+  it('says how much light a route absorbs instead of a negative photon count', () => {
+    // Chapman cycle: O2 photolysis then two associations, net 3 O2 → 2 O3 with one photon (common practice).
+    const report = formatReport(analyseMechanism('C1: O2 + hν -> 2 O(3P)\nC2: O(3P) + O2 + M -> O3 + M'), 'chapman.steps');
+    expect(report).toContain('net: 3 O2 → 2 O3 (1 hν absorbed);');
+    expect(report).not.toMatch(/-\d+ hν/);
+  });
+
   it('counts the findings in the singular and plural', () => {
     const report = formatReport(analyseMechanism('Br2 + hν -> 2 Br•'), 'one.steps');
     expect(report).toContain('Diagnostics: 0 errors, 0 warnings, 1 note');

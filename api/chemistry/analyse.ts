@@ -2,7 +2,7 @@ import { parseMechanism } from '@grammar/parse';
 import type { Diagnostic } from '@grammar/diagnostics';
 import type { MechanismAnalysis, SpeciesJson, SpeciesRole, StepJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
-import { cachedLookup, enthalpyOf } from './enthalpy';
+import { cachedLookup, declaredNamesLookup, enthalpyOf } from './enthalpy';
 import { formedAndConsumedKeys } from './formed-and-consumed';
 import { readDirectives, type MechanismSettings } from './directives';
 import { reportRadicalMarks } from './radical-marks';
@@ -42,10 +42,11 @@ function readMechanism(text: string, lookup: EnthalpyLookup) {
   const diagnostics = [...parsed.diagnostics];
   const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
   const registry = new SpeciesRegistry(settings.declarations, diagnostics);
-  const pass = new StepPass(registry, lookup, diagnostics);
+  const namedLookup = declaredNamesLookup(lookup, settings.declarations);
+  const pass = new StepPass(registry, namedLookup, diagnostics);
   parsed.steps.forEach(pass.add);
   pass.finish();
-  return { diagnostics, settings, registry, pass };
+  return { diagnostics, settings, registry, pass, lookup: namedLookup };
 }
 
 /**
@@ -63,7 +64,7 @@ function readUndeclared(text: string, lookup: EnthalpyLookup) {
   const diagnostics = [...parsed.diagnostics];
   const settings: MechanismSettings = readDirectives(parsed.directives, diagnostics);
   for (const item of stepDiagnostics) diagnostics.push(item);
-  return { diagnostics, settings, registry, pass };
+  return { diagnostics, settings, registry, pass, lookup };
 }
 
 function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: EnthalpyLookup): SpeciesJson {
@@ -95,8 +96,8 @@ function emptyRoutes(diagnostics: Diagnostic[]): RouteAnalysis {
  * Pure: no I/O. Never throws on any text; every problem becomes a diagnostic.
  */
 export function analyseMechanism(text: string, options: AnalyseOptions = {}): MechanismAnalysis {
-  const lookup = cachedLookup(options.enthalpy ?? builtinEnthalpy);
-  const { diagnostics, settings, registry, pass } = readMechanism(text, lookup);
+  // The lookup comes back from reading: declared names take their declared species' enthalpy.
+  const { diagnostics, settings, registry, pass, lookup } = readMechanism(text, cachedLookup(options.enthalpy ?? builtinEnthalpy));
   const { steps, json: stepJson } = pass;
   const species = registry.all();
   reportRadicalMarks(species, diagnostics);

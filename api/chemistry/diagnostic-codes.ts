@@ -35,6 +35,7 @@ export const DIAGNOSTIC_CODES = {
   'even-electrons-marked': { severity: 'warning', meaning: 'a radical mark on an even-electron species without a state tag' },
   'step-class': { severity: 'info', meaning: 'a step that starts, branches or ends radical chains' },
   'duplicate-label': { severity: 'error', meaning: 'two steps share a label' },
+  'step-changes-nothing': { severity: 'warning', meaning: 'a step with the same species in the same amounts on both sides' },
   'duplicate-step': { severity: 'warning', meaning: 'the same step is written twice' },
   'suggested-fix': { severity: 'info', meaning: 'a small change that balances an unbalanced step' },
   'no-steps': { severity: 'warning', meaning: 'the text has no steps to analyse' },

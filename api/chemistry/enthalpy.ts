@@ -1,6 +1,7 @@
 import type { Fraction } from './fraction';
 import type { RegisteredSpecies } from './species-registry';
 import type { StepModel } from './step-model';
+import { resolveSpecies, type DeclaredSpecies } from './species-resolve';
 import { roundNoise } from './thermo-lookup';
 import { addToNet, clearNet, netEnthalpy, newNetReaction, reactionEnthalpy, type NetReaction, thresholdWavelengthNm, type EnthalpyEntry, type EnthalpyLookup } from './thermo';
 
@@ -16,6 +17,22 @@ export function cachedLookup(lookup: EnthalpyLookup): EnthalpyLookup {
     return entry;
   };
 }
+
+/**
+ * A lookup in which a name declared with a composition (`%species RO2 = C2H5O2•`) takes the
+ * enthalpy of the species it is declared as: the name stands for exactly that spelling. Opaque
+ * names and everything else are looked up as written.
+ */
+export function declaredNamesLookup(lookup: EnthalpyLookup, declarations: ReadonlyMap<string, DeclaredSpecies>): EnthalpyLookup {
+  const spelled = new Map<string, string>();
+  for (const [name, declared] of declarations) {
+    const key = declared.species ? resolveSpecies(declared.species, NO_DECLARATIONS).info?.key : undefined;
+    if (key) spelled.set(name, key);
+  }
+  return spelled.size === 0 ? lookup : (key) => lookup(spelled.get(key) ?? key);
+}
+
+const NO_DECLARATIONS: ReadonlyMap<string, DeclaredSpecies> = new Map();
 
 export interface StepEnthalpy {
   dH: number | null;

@@ -94,7 +94,10 @@ export function chooseIntermediates(
   const terminalNote = declared.terminal.size > 0 ? ` (less the %terminal species ${listed([...declared.terminal])})` : '';
   const base = `Species both formed and consumed${terminalNote}: ${listed(keys)}.`;
   const productiveAsIs = productive(keys);
-  if (keys.length === 0 || productiveAsIs) {
+  if (keys.length === 0) {
+    return { keys, explanation: `No species is both formed and consumed${terminalNote}, so there are no intermediates: every step is a route of its own.`, productive: productiveAsIs };
+  }
+  if (productiveAsIs) {
     return { keys, explanation: `${base} They are treated as intermediates.`, productive: productiveAsIs };
   }
   for (const released of initial.filter(closedShellNeutral)) {

@@ -53,7 +53,7 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
 
 function reportOpaque(step: StepModel, balance: StepBalance, diagnostics: Diagnostic[]): void {
   if (balance.elementsChecked) return;
-  const opaque = termsOf(step).filter((term) => term.species.opaque).map((term) => term.species.key);
+  const opaque = [...new Set(termsOf(step).filter((term) => term.species.opaque).map((term) => term.species.key))];
   diagnostics.push(finding('opaque-species', step, `step ${step.id} contains the opaque ${opaque.length === 1 ? 'name' : 'names'} ${opaque.join(', ')}; its elements are not checked (charge and sites are)`));
 }
 

@@ -41,8 +41,33 @@ function thirdBodyCount(terms: readonly StepTerm[]): number {
   return term ? term.coef : 0;
 }
 
-/** The photon, third-body, molecularity and lumping rules of one step. */
+function aside(term: StepTerm): boolean {
+  return term.species.kind === 'photon' || term.species.kind === 'third-body';
+}
+
+function sameTermOn(terms: readonly StepTerm[], wanted: StepTerm): boolean {
+  for (const term of terms) if (term.key === wanted.key && term.coef === wanted.coef) return true;
+  return false;
+}
+
+/** Every species (hν and M aside) has the same amount on both sides: running the step changes nothing. */
+export function changesNothing(step: StepModel): boolean {
+  let count = 0;
+  for (const term of step.reactants) {
+    if (aside(term)) continue;
+    if (!sameTermOn(step.products, term)) return false;
+    count += 1;
+  }
+  let productCount = 0;
+  for (const term of step.products) if (!aside(term)) productCount += 1;
+  return count === productCount;
+}
+
+/** The photon, third-body, molecularity and lumping rules of one step, and a step that changes nothing. */
 export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void {
+  if (changesNothing(step)) {
+    diagnostics.push(finding('step-changes-nothing', step, `step ${step.id} changes nothing: every species has the same amount on both sides`));
+  }
   const photon = step.productPhoton;
   if (photon) diagnostics.push(finding('photon-on-product-side', photon, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.text }));
   const before = thirdBodyCount(step.reactants);

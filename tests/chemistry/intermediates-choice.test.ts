@@ -40,6 +40,12 @@ describe('choice of intermediates', () => {
     expect(analysis.intermediatesExplanation).toContain('only the reactive species');
   });
 
+  it('says so plainly when no species is both formed and consumed', () => {
+    const analysis = analyseMechanism('P1: NO• + O3 -> NO2• + O2');
+    expect(analysis.intermediates).toEqual([]);
+    expect(analysis.intermediatesExplanation).toBe('No species is both formed and consumed, so there are no intermediates: every step is a route of its own.');
+  });
+
   it('follows %intermediates when given', () => {
     const analysis = analyseMechanism(`%intermediates Br•\n${exampleText('hydrogen-bromine-chain.steps')}`);
     expect(analysis.intermediates).toEqual(['Br•']);

@@ -108,3 +108,15 @@ describe('step checks', () => {
     expect(analysis.diagnostics).toContainEqual(expect.objectContaining({ code: 'duplicate-step', line: 2 }));
   });
 });
+
+describe('a step that changes nothing', () => {
+  it('is a warning, with hν and M aside; a real change with the same species is not', () => {
+    const codes = (text: string) => analyseMechanism(text).diagnostics.map((item) => item.code);
+    expect(codes('Q1: NO2• + M -> NO2• + M')).toContain('step-changes-nothing');
+    expect(codes('Q1: NO2• + hν -> NO2•')).toContain('step-changes-nothing');
+    expect(codes('Q1: 2 NO2• -> NO2• + NO2•')).toContain('step-changes-nothing');
+    expect(codes('Q1: O2(a1Δg) + M -> O2 + M')).not.toContain('step-changes-nothing');
+    expect(codes('Q1: 2 NO2• -> NO2•')).not.toContain('step-changes-nothing');
+    expect(codes('Q1: NO2• + O3 -> NO2• + O3 + O2')).not.toContain('step-changes-nothing');
+  });
+});

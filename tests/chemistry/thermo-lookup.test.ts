@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { analyseMechanism } from '@api/chemistry/analyse';
 import { builtinEnthalpy, chainLookups, createEnthalpyLookup, type EnthalpyLookup } from '@api/chemistry/thermo';
 
 const dfH = (key: string) => builtinEnthalpy(key)?.dfH ?? null;
@@ -86,5 +87,21 @@ describe('chainLookups', () => {
     expect(chained('O3')?.dfH).toBe(142.674);
     expect(chained('C2H4O')).toBeNull();
     expect(chainLookups()('O3')).toBeNull();
+  });
+});
+
+describe('declared names in enthalpies', () => {
+  it('gives a name declared with a composition the enthalpy of that spelling; an opaque name has none', () => {
+    const written = analyseMechanism('P1: CH3O2• + NO• -> CH3O• + NO2•');
+    const text = '%species RO2 = CH3O2•\n%species Enz\n%species EnzO\nP1: RO2 + NO• -> CH3O• + NO2•\nP2: Enz + O3 -> EnzO + O2\nP3: EnzO + O3 -> Enz + 2 O2';
+    const named = analyseMechanism(text);
+    expect(written.steps[0].dH).not.toBeNull();
+    expect(named.steps[0].dH).toBe(written.steps[0].dH);
+    expect(named.species.find((item) => item.key === 'RO2')?.dfH).toBe(builtinEnthalpy('CH3O2•')?.dfH);
+    expect(named.species.find((item) => item.key === 'Enz')?.dfH).toBeNull();
+    expect(named.steps[1].dH).toBeNull();
+    // The opaque names cancel in the route, whose ΔH is then that of 2 O3 → 3 O2 (NIST-JANAF O3 entry, from memory).
+    const route = named.routes.find((item) => item.netSpecies.O3 === -2);
+    expect(route?.dH).toBeCloseTo(-285.3, 0);
   });
 });

@@ -70,6 +70,10 @@ export function checkStepRules(step: StepModel, diagnostics: Diagnostic[]): void
   }
   const photon = step.productPhoton;
   if (photon) diagnostics.push(finding('photon-on-product-side', photon, `hν may only be a reactant (step ${step.id}); light given off is not part of the balance`, { found: photon.text }));
+  if (step.reversible && !photon) {
+    const light = step.reactants.find((term) => term.species.kind === 'photon');
+    if (light) diagnostics.push(finding('reversible-photolysis', step, `step ${step.id} absorbs hν but is reversible, so its reverse would give off light; write -> and the back reaction as a step of its own`, { found: '⇌', expected: ['->'] }));
+  }
   const before = thirdBodyCount(step.reactants);
   const after = thirdBodyCount(step.products);
   if (before !== after || before > 1) {

@@ -38,6 +38,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'even-electrons-marked': { text: 'O• + O3 -> 2 O2', line: 1, column: 1 },
   'step-class': { text: 'Br2 + hν -> 2 Br•', line: 1, column: 1 },
   'duplicate-label': { text: 'R1: O3 + hν -> O2 + O(3P)\nR1: O2 + hν -> 2 O(3P)', line: 2, column: 1 },
+  'reversible-photolysis': { text: 'Q1: O3 + hν <=> O2 + O(1D)', line: 1, column: 1 },
   'step-changes-nothing': { text: 'Q1: NO2 + M -> NO2 + M', line: 1, column: 1 },
   'duplicate-step': { text: 'O3 + hν -> O2 + O(3P)\nO3 + hν -> O(3P) + O2', line: 2, column: 1 },
   'suggested-fix': { text: '2 O3 -> 2 O2', line: 1, column: 1 },

@@ -1,6 +1,7 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import type { StepJson } from './analysis-types';
 import { finding } from './diagnostic-codes';
+import type { Fraction } from './fraction';
 import { normalisedStep } from './duplicates';
 import { stepEnthalpy } from './enthalpy';
 import { equationText, type ShownTerm } from './equation-format';
@@ -29,6 +30,10 @@ function reportImbalance(step: StepModel, balance: StepBalance, diagnostics: Dia
 }
 
 function fixedEquation(step: StepModel, fix: BalancingFix): string {
+  if (fix.kind === 'coefficients') {
+    const withCoefficients = (terms: StepTerm[], coefs: Fraction[]): ShownTerm[] => terms.map((term, index) => ({ key: term.key, coef: coefs[index] }));
+    return equationText(withCoefficients(step.reactants, fix.reactants), withCoefficients(step.products, fix.products), step.reversible);
+  }
   const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
     const touched = (term: StepTerm) => fix.side === name && term.key === fix.key;
     const kept = fix.kind === 'remove' ? terms.filter((term) => !touched(term)) : terms;
@@ -42,11 +47,13 @@ function fixedEquation(step: StepModel, fix: BalancingFix): string {
 function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnostics: Diagnostic[]): void {
   const fix = suggestFix(step, candidates);
   if (!fix) return;
-  const change = fix.kind === 'coefficient'
-    ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
-    : fix.kind === 'remove'
-      ? `${fix.coef.toString()} ${fix.key} removed from the ${fix.side}`
-      : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
+  const change = fix.kind === 'coefficients'
+    ? 'these coefficients'
+    : fix.kind === 'coefficient'
+      ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
+      : fix.kind === 'remove'
+        ? `${fix.coef.toString()} ${fix.key} removed from the ${fix.side}`
+        : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
   const fixed = fixedEquation(step, fix);
   diagnostics.push(finding('suggested-fix', step, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }

@@ -1,10 +1,15 @@
 import { Fraction } from './fraction';
+import { nullSpace, type SparseRow } from './integer-matrix';
 import type { SpeciesInfo } from './species-model';
 import type { StepModel, StepTerm } from './step-model';
 
-/** A change that balances a step: a new coefficient for one term, a term removed, or an added species. */
+/**
+ * A change that balances a step: a new coefficient for one term, new whole coefficients for every
+ * species term (hν and M keep theirs), a term removed, or an added species.
+ */
 export type BalancingFix =
   | { kind: 'coefficient'; side: 'reactants' | 'products'; key: string; from: Fraction; to: Fraction }
+  | { kind: 'coefficients'; reactants: Fraction[]; products: Fraction[] }
   | { kind: 'remove'; side: 'reactants' | 'products'; key: string; coef: Fraction }
   | { kind: 'add'; side: 'reactants' | 'products'; key: string; coef: Fraction };
 
@@ -109,19 +114,56 @@ function additionFixes(step: StepModel, diff: Vector, candidates: readonly Candi
   return fixes;
 }
 
+function aside(term: StepTerm): boolean {
+  return term.species.kind === 'photon' || term.species.kind === 'third-body';
+}
+
+/**
+ * New coefficients for all the species of the step, when exactly one set of positive whole numbers
+ * balances it (CH4 + O2 → CO2 + H2O becomes CH4 + 2 O2 → CO2 + 2 H2O): the exact null space of
+ * its composition matrix, reactant columns negated, must be one vector of a single sign.
+ */
+function rebalanced(step: StepModel): BalancingFix | null {
+  const terms = [...step.reactants, ...step.products];
+  if (terms.some((term) => term.species.opaque)) return null;
+  const columns = terms.map((term, index) => ({ term, index, sign: index < step.reactants.length ? -1n : 1n })).filter(({ term }) => !aside(term));
+  const rows = new Map<string, SparseRow>();
+  columns.forEach(({ term, sign }, column) => {
+    for (const [dimension, count] of composition(term.species)) {
+      const row = rows.get(dimension) ?? new Map<number, bigint>();
+      row.set(column, sign * BigInt(count.toNumber()));
+      rows.set(dimension, row);
+    }
+  });
+  const basis = nullSpace([...rows.values()], columns.length);
+  if (basis.length !== 1) return null;
+  const [vector] = basis;
+  const positive = vector.every((value) => value > 0n);
+  if (!positive && !vector.every((value) => value < 0n)) return null;
+  const coefficients = terms.map((term) => term.fraction);
+  columns.forEach(({ index }, column) => {
+    coefficients[index] = Fraction.of(Number(positive ? vector[column] : -vector[column]));
+  });
+  return { kind: 'coefficients', reactants: coefficients.slice(0, step.reactants.length), products: coefficients.slice(step.reactants.length) };
+}
+
 function wholeNumbers(fix: BalancingFix): boolean {
+  if (fix.kind === 'coefficients') return true;
   return fix.kind === 'coefficient' ? fix.to.isInteger() : fix.coef.isInteger();
 }
 
 /**
- * A small change that balances an unbalanced step: a new coefficient for one of its terms (or the
- * term removed), else one added species (the mechanism's own species first, then common small
- * ones). Whole-number changes are preferred. Null when no such change balances the step.
+ * A small change that balances an unbalanced step, in this order of preference: a new whole
+ * coefficient for one of its terms (or the term removed); new whole coefficients for all its
+ * species, when only one such set exists; one added species in a whole amount (the mechanism's own
+ * species first, then common small ones); then the same changes in fractions. Null when no such
+ * change balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);
   if (diff.size === 0) return null;
   const usable = [...mechanismSpecies, ...COMMON_SMALL_SPECIES].filter((c) => !c.opaque && c.kind !== 'photon' && c.kind !== 'third-body');
-  const fixes = [...coefficientFixes(step, diff), ...additionFixes(step, diff, usable)];
-  return fixes.find(wholeNumbers) ?? fixes[0] ?? null;
+  const single = coefficientFixes(step, diff);
+  const added = additionFixes(step, diff, usable);
+  return single.find(wholeNumbers) ?? rebalanced(step) ?? added.find(wholeNumbers) ?? single[0] ?? added[0] ?? null;
 }

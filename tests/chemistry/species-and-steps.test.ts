@@ -94,6 +94,17 @@ describe('step checks', () => {
     expect(fixes('C6H12O6 -> Xe')).toEqual([]);
   });
 
+  it('rebalances every coefficient when one set of whole numbers does it and no single change can', () => {
+    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.expected?.[0]);
+    // Balanced combustion and water formation: textbook stoichiometry (common practice).
+    expect(fixes('CH4 + O2 -> CO2 + H2O')).toEqual(['CH4 + 2 O2 → CO2 + 2 H2O']);
+    expect(fixes('H2 + O2 -> H2O')).toEqual(['2 H2 + O2 → 2 H2O']);
+    expect(fixes('C3H8 + O2 + M -> CO2 + H2O + M')).toEqual(['C3H8 + 5 O2 + M → 3 CO2 + 4 H2O + M']);
+    expect(fixes('MnO4^- + Fe^2+ + H^+ -> Mn^2+ + Fe^3+ + H2O')).toEqual(['MnO4^- + 5 Fe^2+ + 8 H^+ → Mn^2+ + 5 Fe^3+ + 4 H2O']);
+    // With two independent sets of coefficients there is no one rebalancing; a single change is offered instead.
+    expect(fixes('C + O2 -> CO + CO2')).toEqual(['C + O2 → CO2']);
+  });
+
   it('removes a stray term rather than writing the same species on both sides', () => {
     const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.message);
     // Adding e^- to the reactants would balance the charge too, but leave e^- on both sides.

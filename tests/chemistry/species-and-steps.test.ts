@@ -1,6 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMechanism } from '@api/chemistry/analyse';
 
+/** The suggested-fix findings of a text. */
+function suggestedFixes(text: string) {
+  return analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix');
+}
+
+/** The balanced equations the suggested fixes propose. */
+function fixes(text: string) {
+  return suggestedFixes(text).map((item) => item.expected?.[0]);
+}
+
 function species(text: string, key: string) {
   return analyseMechanism(text).species.find((item) => item.key === key);
 }
@@ -86,7 +96,6 @@ describe('step checks', () => {
   });
 
   it('suggests the smallest whole-number change that balances a step', () => {
-    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.expected?.[0]);
     expect(fixes('2 O3 -> 2 O2')).toEqual(['2 O3 → 3 O2']);
     expect(fixes('H2O2 + I^- -> IO^-')).toEqual(['H2O2 + I^- → IO^- + H2O']);
     expect(fixes('CO + * -> CO*2')).toEqual(['CO + 2 * → CO*2']);
@@ -95,7 +104,6 @@ describe('step checks', () => {
   });
 
   it('rebalances every coefficient when one set of whole numbers does it and no single change can', () => {
-    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.expected?.[0]);
     // Balanced combustion and water formation: textbook stoichiometry (common practice).
     expect(fixes('CH4 + O2 -> CO2 + H2O')).toEqual(['CH4 + 2 O2 → CO2 + 2 H2O']);
     expect(fixes('H2 + O2 -> H2O')).toEqual(['2 H2 + O2 → 2 H2O']);
@@ -106,7 +114,7 @@ describe('step checks', () => {
   });
 
   it('removes a stray term rather than writing the same species on both sides', () => {
-    const fixes = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.code === 'suggested-fix').map((item) => item.message);
+    const fixes = (text: string) => suggestedFixes(text).map((item) => item.message);
     // Adding e^- to the reactants would balance the charge too, but leave e^- on both sides.
     const [fewer] = fixes('H2O2 -> O2 + 2 H^+ + 3 e^-');
     expect(fewer).toContain('2 e^- instead of 3 e^- among the products: H2O2 → O2 + 2 H^+ + 2 e^-');

@@ -114,11 +114,11 @@ describe('step checks', () => {
   });
 
   it('removes a stray term rather than writing the same species on both sides', () => {
-    const fixes = (text: string) => suggestedFixes(text).map((item) => item.message);
+    const messages = (text: string) => suggestedFixes(text).map((item) => item.message);
     // Adding e^- to the reactants would balance the charge too, but leave e^- on both sides.
-    const [fewer] = fixes('H2O2 -> O2 + 2 H^+ + 3 e^-');
+    const [fewer] = messages('H2O2 -> O2 + 2 H^+ + 3 e^-');
     expect(fewer).toContain('2 e^- instead of 3 e^- among the products: H2O2 → O2 + 2 H^+ + 2 e^-');
-    const [stray] = fixes('H2O -> H2 + 1/2 O2 + e^-');
+    const [stray] = messages('H2O -> H2 + 1/2 O2 + e^-');
     expect(stray).toContain('1 e^- removed from the products: H2O → H2 + 1/2 O2');
   });
 

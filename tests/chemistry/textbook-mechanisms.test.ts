@@ -44,6 +44,16 @@ describe('textbook mechanisms: net reactions, stoichiometric numbers and roles',
     expect(analysis.routes[0].dH).toBeCloseTo(-285.3, 1);
   });
 
+  // Decomposition of N2O5 (Ogg's mechanism): N2O5 ⇌ NO2 + NO3; NO2 + NO3 → NO + O2 + NO2;
+  // NO + NO3 → 2 NO2; net 2 N2O5 → 4 NO2 + O2 with σ = (2, 1, 1). Atkins' Physical Chemistry,
+  // "Complex reactions" (from memory).
+  it('N2O5 decomposition: 2 N2O5 → 4 NO2 + O2 with NO3 and NO the intermediates', () => {
+    const analysis = analyseMechanism('Z1: N2O5 <=> NO2 + NO3\nZ2: NO2 + NO3 -> NO + O2 + NO2\nZ3: NO + NO3 -> 2 NO2');
+    expect(analysis.intermediates).toEqual(['NO3', 'NO']);
+    expect(productive(analysis)).toEqual([expect.objectContaining({ multipliers: { Z1: 2, Z2: 1, Z3: 1 }, netSpecies: { N2O5: -2, NO2: 4, O2: 1 } })]);
+    expect(roles(analysis)).toMatchObject({ N2O5: 'reactant', NO2: 'product', O2: 'product', NO3: 'intermediate', NO: 'intermediate' });
+  });
+
   // H2 + Br2 → 2 HBr chain: initiation, two propagations, inhibition, termination; the chain carriers
   // Br and H cancel. Atkins' Physical Chemistry, "Chain reactions" (from memory).
   it('H2 + Br2 chain (examples/hydrogen-bromine-chain.steps): chain carriers Br• and H•, net H2 + Br2 → 2 HBr', () => {

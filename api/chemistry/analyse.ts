@@ -75,7 +75,7 @@ function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: Enthalp
 
 function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
   if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) {
-    const context = { steps, stoichiometry: buildStoichiometry(steps), stepDH: stepJson.map((step) => step.dH), lookup, diagnostics };
+    const context = { steps, stoichiometry: buildStoichiometry(steps), stepDH: stepJson.map((step) => step.dH), stepBalanced: stepJson.map((step) => step.balanced), lookup, diagnostics };
     return analyseRoutes(context, species, settings, maxRouteSteps);
   }
   const intermediates = formedAndConsumedKeys(species, settings.terminal);

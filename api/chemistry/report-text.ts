@@ -13,7 +13,8 @@ function molecularityText(value: number): string {
 function stepLine(step: StepJson): string {
   const balance = step.balanced ? 'balanced' : 'NOT balanced';
   const threshold = step.thresholdNm !== null ? `, λ < ${step.thresholdNm.toFixed(0)} nm` : '';
-  return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${molecularityText(step.molecularity)}, ${kj(step.dH)}${threshold}`;
+  const enthalpy = step.balanced ? kj(step.dH) : 'no ΔH (not balanced)';
+  return `  ${step.id.padEnd(8)} ${step.equation}\n           ${balance}, ${step.class}, molecularity ${molecularityText(step.molecularity)}, ${enthalpy}${threshold}`;
 }
 
 /** `1×R1 − 2×R3 + 1×R4`: a step run backwards (σ < 0) is subtracted rather than added. */

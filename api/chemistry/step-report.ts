@@ -96,8 +96,9 @@ export function reportStep(step: StepModel, lookup: EnthalpyLookup, candidates: 
     photolysis: step.reactants.some((term) => term.species.kind === 'photon'),
     molecularity: molecularity(step),
     elementary: isElementary(step),
-    dH: enthalpy.dH,
-    thresholdNm: enthalpy.thresholdNm,
+    // Σ ν ΔfH° of a step that does not conserve its atoms is no reaction enthalpy: none is given.
+    dH: balance.balanced ? enthalpy.dH : null,
+    thresholdNm: balance.balanced ? enthalpy.thresholdNm : null,
     missingEnthalpies: enthalpy.missing,
     usedEnthalpies: enthalpy.used,
     // The rate as the parser read it ({ forward, reverse, line, column }): nothing changes it, so it is not copied.

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMechanism } from '@api/chemistry/analyse';
+import { formatReport } from '@api/chemistry/report-text';
 
 /** The suggested-fix findings of a text. */
 function suggestedFixes(text: string) {
@@ -101,6 +102,17 @@ describe('step checks', () => {
     expect(fixes('CO + * -> CO*2')).toEqual(['CO + 2 * → CO*2']);
     expect(fixes('Fe^3+ -> Fe^2+')).toEqual(['Fe^3+ + e^- → Fe^2+']);
     expect(fixes('C6H12O6 -> Xe')).toEqual([]);
+  });
+
+  it('gives no ΔH or threshold for a step that does not conserve its atoms', () => {
+    const [unbalanced] = analyseMechanism('Cl2 + hν -> Cl•').steps;
+    expect(unbalanced).toMatchObject({ balanced: false, dH: null, thresholdNm: null });
+    const [balanced] = analyseMechanism('Cl2 + hν -> 2 Cl•').steps;
+    expect(balanced.dH).not.toBeNull();
+    const analysis = analyseMechanism('Cl2 + hν -> Cl•');
+    expect(formatReport(analysis, 'one.steps')).toContain('NOT balanced, initiation, molecularity 1, no ΔH (not balanced)');
+    // Nor has a route through it, whose net reaction is as unbalanced as the step.
+    expect(analysis.routes[0]).toMatchObject({ net: 'Cl2 → Cl•', dH: null, dHFromSteps: null, dHFromNet: null });
   });
 
   it('rebalances every coefficient when one set of whole numbers does it and no single change can', () => {

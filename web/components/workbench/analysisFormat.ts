@@ -6,6 +6,12 @@ export function formatEnthalpy(value: number | null): string {
   return value.toFixed(1).replace('-', '−');
 }
 
+/** Why a step's ΔH is what it is, for its tooltip: not given for an unbalanced step, or the species without ΔfH. */
+export function enthalpyNote(step: Pick<StepJson, 'balanced' | 'missingEnthalpies'>): string | undefined {
+  if (!step.balanced) return 'No ΔH: the step is not balanced';
+  return step.missingEnthalpies.length > 0 ? `No ΔfH for ${step.missingEnthalpies.join(', ')}` : undefined;
+}
+
 /** A photolysis threshold wavelength in nm, rounded to the nanometre. */
 export function formatWavelength(value: number | null): string {
   return value === null ? '—' : `${Math.round(value)} nm`;

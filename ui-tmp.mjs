@@ -1,0 +1,28 @@
+import { chromium } from 'playwright-core';
+const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox'] });
+const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+const base = 'http://127.0.0.1:3000';
+await page.goto(`${base}/sign-in`);
+await page.getByLabel('E-mail').fill('rosalind.samphire@saltmarsh.example.test');
+await page.getByLabel('Password').first().fill('saltmarsh-demo-2026');
+await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+await page.getByRole('link', { name: 'New mechanism' }).first().click();
+await page.waitForURL(/\/new$/);
+await page.getByLabel('Title').fill('Probe of new checks');
+const editor = page.locator('.cm-content');
+await editor.waitFor();
+await editor.click();
+await page.keyboard.insertText('F1: CH4 + O2 -> CO2 + H2O\nQ1: O3 + hν <=> O2 + O(1D)\nQ2: NO2• + M -> NO2• + M\nV1: H^+ + e^- + * -> H*\nV2: 2 H* -> H2 + 2 *');
+await page.waitForTimeout(2500);
+await page.screenshot({ path: '/tmp/shots/probe-1.png' });
+await page.locator('.cm-lintRange-error').first().hover();
+await page.waitForTimeout(800);
+await page.screenshot({ path: '/tmp/shots/probe-2.png' });
+const fix = page.locator('.cm-diagnosticAction', { hasText: 'Use' }).first();
+if (await fix.count()) { await fix.click(); await page.waitForTimeout(2000); }
+await page.screenshot({ path: '/tmp/shots/probe-3.png' });
+await page.getByRole('tab', { name: 'Routes' }).click();
+await page.waitForTimeout(800);
+await page.screenshot({ path: '/tmp/shots/probe-4.png' });
+await browser.close();

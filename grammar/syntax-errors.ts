@@ -104,6 +104,13 @@ const LOOK_ALIKES: Record<string, string> = {
   '³': '3',
 };
 
+/** The reserved words, for a syntax error where one stands in a place of a name (`%species M = N2`). */
+const RESERVED_WORDS: Record<string, string> = {
+  thirdBody: 'any third body',
+  photon: 'a photon',
+  electron: 'an electron',
+};
+
 /** A syntax error at a token (or at the end of the line when `token` is null). */
 export function syntaxDiagnostic(
   line: number,
@@ -116,7 +123,10 @@ export function syntaxDiagnostic(
   const what = token?.type === 'invalid' ? `unexpected character '${found}'` : token ? `unexpected '${found}'` : 'the line ends too early';
   const directiveLine = lineText.trimStart().startsWith('%');
   const lookAlike = token && !(directiveLine && found === '=') ? LOOK_ALIKES[found] : undefined;
-  const hint = lookAlike ? ` (write '${lookAlike}' for '${found}')` : '';
+  // Only where a name was wanted and the reserved word itself was not: `%species M = N2`, not `O + M M`.
+  const nameWanted = expected.includes(TOKEN_NAMES.word) && !expected.includes(TOKEN_NAMES[token?.type ?? ''] ?? '');
+  const reserved = token && !lookAlike && nameWanted ? RESERVED_WORDS[token.type ?? ''] : undefined;
+  const hint = lookAlike ? ` (write '${lookAlike}' for '${found}')` : reserved ? ` (${found} is reserved: ${reserved})` : '';
   const message = expected.length > 0 ? `${what}${hint}; expected ${expected.join(', ')}` : `${what}${hint}`;
   return diagnostic('error', PARSER_CODES.syntaxError, { line, column }, message, { found, expected });
 }

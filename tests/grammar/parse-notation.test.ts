@@ -158,6 +158,13 @@ describe('parseMechanism: rejected notation', () => {
     expect(message('%conditions T == 298 K')).toBe("unexpected '='; expected a value");
   });
 
+  it('says a reserved word cannot be a name, only where a name was wanted', () => {
+    const message = (line: string) => parseMechanism(line).diagnostics[0]?.message ?? '';
+    expect(message('%species M = N2')).toBe("unexpected 'M' (M is reserved: any third body); expected a formula or declared name");
+    expect(message('%species hv')).toContain('(hv is reserved: a photon)');
+    expect(message('O + M M -> O + M')).toBe("unexpected 'M'; expected '+', an arrow (->, →, <=>, ⇌)");
+  });
+
   it('reports a line that is too long without reading it', () => {
     const [error] = parseMechanism(`A -> B @ ${'1+'.repeat(2_000)}1`).diagnostics;
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });

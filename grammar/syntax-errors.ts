@@ -99,10 +99,20 @@ const LOOK_ALIKES: Record<string, string> = {
   '⇄': '⇌',
   '⁺': '^+',
   '⁻': '^-',
+  '\u00a0': ' ', // a no-break space, as word processors put between a number and its unit
+  '\u2009': ' ',
+  '\u202f': ' ',
   '¹': '1',
   '²': '2',
   '³': '3',
 };
+
+/** A character as a message shows it: quoted, or by its code point when it cannot be seen (U+00A0). */
+function visible(char: string): string {
+  const code = char.codePointAt(0) ?? 0;
+  const invisible = code < 0x20 || (code >= 0x7f && code <= 0xa0) || (code >= 0x2000 && code <= 0x200f) || code === 0x202f || code === 0xfeff;
+  return invisible && char.length === 1 ? `U+${code.toString(16).toUpperCase().padStart(4, '0')}` : `'${char}'`;
+}
 
 /** The reserved words, for a syntax error where one stands in a place of a name (`%species M = N2`). */
 const RESERVED_WORDS: Record<string, string> = {
@@ -119,14 +129,15 @@ export function syntaxDiagnostic(
   expected: string[],
 ): Diagnostic {
   const found = token ? (token.type === 'invalid' ? token.text[0] : token.text) : 'end of line';
+  const shown = visible(found);
   const column = token ? token.col : lineText.trimEnd().length + 1;
-  const what = token?.type === 'invalid' ? `unexpected character '${found}'` : token ? `unexpected '${found}'` : 'the line ends too early';
+  const what = token?.type === 'invalid' ? `unexpected character ${shown}` : token ? `unexpected '${found}'` : 'the line ends too early';
   const directiveLine = lineText.trimStart().startsWith('%');
   const lookAlike = token && !(directiveLine && found === '=') ? LOOK_ALIKES[found] : undefined;
   // Only where a name was wanted and the reserved word itself was not: `%species M = N2`, not `O + M M`.
   const nameWanted = expected.includes(TOKEN_NAMES.word) && !expected.includes(TOKEN_NAMES[token?.type ?? ''] ?? '');
   const reserved = token && !lookAlike && nameWanted ? RESERVED_WORDS[token.type ?? ''] : undefined;
-  const hint = lookAlike ? ` (write '${lookAlike}' for '${found}')` : reserved ? ` (${found} is reserved: ${reserved})` : '';
+  const hint = lookAlike ? ` (write ${lookAlike === ' ' ? 'a plain space' : `'${lookAlike}'`} for ${shown})` : reserved ? ` (${found} is reserved: ${reserved})` : '';
   const message = expected.length > 0 ? `${what}${hint}; expected ${expected.join(', ')}` : `${what}${hint}`;
   return diagnostic('error', PARSER_CODES.syntaxError, { line, column }, message, { found, expected });
 }

@@ -156,6 +156,9 @@ describe('parseMechanism: rejected notation', () => {
     expect(message('Cl• + O3 = ClO• + O2')).toContain("(write '->' for '=')");
     expect(message('O3 + hν -> O2 + O(¹D)')).toContain("(write '1' for '¹')");
     expect(message('%conditions T == 298 K')).toBe("unexpected '='; expected a value");
+    // Characters that cannot be seen are named by their code point.
+    expect(message('O3\u00a0+ hν -> O2 + O(3P)')).toContain('unexpected character U+00A0 (write a plain space for U+00A0)');
+    expect(message('O3 \u0001 -> O2 + O(3P)')).toContain('unexpected character U+0001;');
   });
 
   it('says a reserved word cannot be a name, only where a name was wanted', () => {

@@ -59,6 +59,14 @@ describe('WorkbenchStepsPanel with the salt-lake bromine cycle', () => {
     expect(rows.find((row) => row.startsWith('F12 |'))).toContain('| charge −1 |');
   });
 
+  it('gives an unbalanced step no ΔH and says why on hover', () => {
+    const wrapper = mountPanel(WorkbenchStepsPanel, golden('faulty'));
+    const row = wrapper.findAll('tbody tr').find((item) => item.text().startsWith('F15'));
+    const enthalpy = row?.findAll('td')[4].find('span');
+    expect(enthalpy?.text()).toBe('—');
+    expect(enthalpy?.attributes('title')).toBe('No ΔH: the step is not balanced');
+  });
+
   it('asks to select a step when its label is pressed, and marks the selected row', async () => {
     const wrapper = mountPanel(WorkbenchStepsPanel, bromine, 'B2');
     expect(wrapper.findAll('tbody tr')[1].classes()).toContain('workbench-steps-panel__row--selected');

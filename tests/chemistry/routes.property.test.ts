@@ -75,3 +75,52 @@ describe('routes (property-based)', () => {
     );
   });
 });
+
+// Hess's law: the ΔH of a route summed over its steps equals the ΔH of its net reaction, for any set of
+// balanced steps over species with tabulated enthalpies of formation (common practice).
+const BALANCED_STEPS = [
+  'O3 + hν -> O2 + O(3P)',
+  'O(3P) + O2 + M -> O3 + M',
+  'O(3P) + O3 -> 2 O2',
+  'NO• + O3 -> NO2• + O2',
+  'NO2• + O(3P) -> NO• + O2',
+  'NO2• + hν -> NO• + O(3P)',
+  'Cl• + O3 -> ClO• + O2',
+  'ClO• + O(3P) -> Cl• + O2',
+  'ClO• + NO• -> Cl• + NO2•',
+  'OH• + O3 -> HO2• + O2',
+  'HO2• + O3 -> OH• + 2 O2',
+  'HO2• + NO• -> OH• + NO2•',
+  'OH• + H2 -> H2O + H•',
+  'H• + O2 + M -> HO2• + M',
+  'Cl• + H2 -> HCl + H•',
+  'H• + Cl2 -> HCl + Cl•',
+  'Cl2 + hν -> 2 Cl•',
+  'H2O2 + hν -> 2 OH•',
+  'HO2• + HO2• -> H2O2 + O2',
+];
+
+describe('route enthalpies (property-based)', () => {
+  it('agree between Σ σ ΔH(step) and ΔH of the net reaction whenever both are known', () => {
+    const picks = fc.uniqueArray(fc.record({ index: fc.nat(BALANCED_STEPS.length - 1), reversible: fc.boolean() }), { minLength: 1, maxLength: 9, selector: (pick) => pick.index });
+    let compared = 0;
+    fc.assert(
+      fc.property(picks, (chosen) => {
+        // A reversible step may not absorb light (its reverse would give it off), so those stay one-way.
+        const lines = chosen.map(({ index, reversible }, position) => {
+          const equation = BALANCED_STEPS[index];
+          return `S${position + 1}: ${reversible && !equation.includes('hν') ? equation.replace('->', '<=>') : equation}`;
+        });
+        const analysis = analyseMechanism(lines.join('\n'));
+        expect(analysis.diagnostics.filter((item) => item.severity === 'error')).toEqual([]);
+        for (const route of analysis.routes) {
+          if (route.dHFromSteps === null || route.dHFromNet === null) continue;
+          expect(route.dHFromSteps).toBeCloseTo(route.dHFromNet, 6);
+          compared += 1;
+        }
+      }),
+      { numRuns: 200 },
+    );
+    expect(compared).toBeGreaterThan(100);
+  });
+});

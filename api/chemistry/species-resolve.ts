@@ -47,10 +47,7 @@ interface Composition {
 function describe(node: SpeciesNode, composition: Composition): SpeciesInfo {
   const { elements, charge, radicalMarks, stateTagged, declared } = composition;
   const electrons = elements ? electronCount(elements, charge) : null;
-  // An adsorbed species' odd electron forms its bond to the site (H*, OH*, CH3* are not radicals on
-  // the surface): there, only a mark the author writes (OH•*) makes it one.
-  const oddCounts = node.sites === 0;
-  const radical = electrons === null || !oddCounts ? radicalMarks > 0 : electrons % 2 === 1 || (radicalMarks > 0 && stateTagged);
+  const radical = electrons === null ? radicalMarks > 0 : electrons % 2 === 1 || (radicalMarks > 0 && stateTagged);
   return {
     key: speciesKey(node.formulaText, node.states, node.radicalMarks, charge, node.sites),
     kind: 'species',

@@ -40,16 +40,6 @@ describe('species model', () => {
     expect(species('O(3P)• + O2 + M -> O3 + M', 'O(3P)•')).toMatchObject({ radical: true });
   });
 
-  // A chemisorbed atom or fragment shares its odd electron with the surface bond (common practice in
-  // surface kinetics, where H*, OH* and CH3* are written without radical marks).
-  it('does not count an adsorbed odd-electron species as a radical, nor ask for a mark; an explicit mark still counts', () => {
-    const analysis = analyseMechanism('V1: H^+ + e^- + * -> H*\nV2: 2 H* -> H2 + 2 *\nV3: OH•* + H* -> H2O + 2 *');
-    expect(analysis.species.find((item) => item.key === 'H*')).toMatchObject({ electrons: 1, radical: false, reactive: true });
-    expect(analysis.species.find((item) => item.key === 'OH•*')).toMatchObject({ electrons: 9, radical: true });
-    expect(analysis.diagnostics.filter((item) => item.code === 'odd-electrons-unmarked')).toEqual([]);
-    expect(analysis.steps.map((step) => step.class)).toEqual(['non-radical', 'non-radical', 'termination']);
-  });
-
   it('does not make a phase tag reactive', () => {
     expect(species('Br2(g) + hν -> 2 Br•', 'Br2(g)')).toMatchObject({ reactive: false, radical: false });
   });

@@ -28,7 +28,7 @@ export const DIAGNOSTIC_CODES = {
   'charge-imbalance': { severity: 'error', meaning: 'charge is not conserved by a step' },
   'site-imbalance': { severity: 'error', meaning: 'surface sites are not conserved by a step' },
   'photon-on-product-side': { severity: 'error', meaning: 'hν may only be a reactant' },
-  'reversible-photolysis': { severity: 'error', meaning: 'a reversible step that absorbs hν (its reverse would give off light)' },
+  'reversible-photolysis': { severity: 'warning', meaning: 'a reversible step that absorbs hν (its reverse would give off light)' },
   'third-body-unpaired': { severity: 'error', meaning: 'M must appear once on each side' },
   'molecularity-above-three': { severity: 'warning', meaning: 'more than three reactant particles: not elementary' },
   'not-elementary': { severity: 'info', meaning: 'non-integer coefficients (a lumped step)' },

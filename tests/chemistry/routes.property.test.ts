@@ -124,3 +124,106 @@ describe('route enthalpies (property-based)', () => {
     expect(compared).toBeGreaterThan(100);
   });
 });
+
+// Direct routes are the elementary routes (Horiuti–Temkin; in metabolic networks, elementary flux modes):
+// a route is direct exactly when the stoichiometry of the intermediates over its own steps has a null space
+// of dimension one (so no route uses fewer of those steps), and it runs every one-way step forwards
+// (Schuster & Hilgetag, J. Biol. Syst. 2 (1994) 165; from memory). Found here by trying every set of steps.
+function nullVector(columns: Fraction[][]): Fraction[] | null {
+  // Gaussian elimination on rows (intermediates) × columns (steps); a vector only when the nullity is one.
+  const width = columns.length;
+  const rows = columns[0].map((_, row) => columns.map((column) => column[row]));
+  const pivots: number[] = [];
+  let rank = 0;
+  for (let column = 0; column < width && rank < rows.length; column += 1) {
+    const found = rows.findIndex((row, index) => index >= rank && !row[column].isZero());
+    if (found < 0) continue;
+    [rows[rank], rows[found]] = [rows[found], rows[rank]];
+    const pivot = rows[rank][column];
+    rows[rank] = rows[rank].map((value) => value.div(pivot));
+    rows.forEach((row, index) => {
+      if (index === rank || row[column].isZero()) return;
+      const factor = row[column];
+      rows[index] = row.map((value, at) => value.sub(rows[rank][at].mul(factor)));
+    });
+    pivots.push(column);
+    rank += 1;
+  }
+  if (width - rank !== 1) return null;
+  const free = [...Array(width).keys()].find((column) => !pivots.includes(column)) as number;
+  const vector = Array.from({ length: width }, () => Fraction.ZERO);
+  vector[free] = Fraction.ONE;
+  pivots.forEach((column, row) => (vector[column] = rows[row][free].neg()));
+  return vector;
+}
+
+function integerRoute(vector: Fraction[]): bigint[] {
+  let scale = 1n;
+  for (const value of vector) scale = (scale * value.den) / gcd(scale, value.den);
+  const whole = vector.map((value) => (value.num * scale) / value.den);
+  const divisor = whole.reduce((g, value) => gcd(g, value < 0n ? -value : value), 0n);
+  return whole.map((value) => value / divisor);
+}
+
+function expectedDirectRoutes(analysis: MechanismAnalysis): Set<string> {
+  const steps = analysis.steps;
+  const found = new Set<string>();
+  for (let subset = 1; subset < 1 << steps.length; subset += 1) {
+    const chosen = steps.filter((_, index) => subset & (1 << index));
+    const columns = chosen.map((step) => (analysis.intermediates.length ? analysis.intermediates : ['(none)']).map((key) => nu(analysis, step.id, key)));
+    const vector = nullVector(columns);
+    if (!vector || vector.some((value) => value.isZero())) continue;
+    let route = integerRoute(vector);
+    const oneWay = chosen.map((step, index) => (step.reversible ? 0 : route[index] > 0n ? 1 : -1));
+    if (oneWay.includes(1) && oneWay.includes(-1)) continue;
+    if (oneWay.includes(-1)) route = route.map((value) => -value);
+    found.add(routeKey(chosen.map((step) => step.id), route));
+  }
+  return found;
+}
+
+/** A route as text, its sign fixed by its first step when every step it uses is reversible. */
+function routeKey(ids: string[], route: bigint[]): string {
+  return ids.map((id, index) => `${route[index]}×${id}`).join(' ');
+}
+
+function reportedDirectRoutes(analysis: MechanismAnalysis): Set<string> {
+  return new Set(
+    analysis.routes
+      .filter((route) => route.direct)
+      .map((route) => {
+        const ids = analysis.steps.map((step) => step.id).filter((id) => route.multipliers[id] !== undefined);
+        return routeKey(ids, ids.map((id) => BigInt(route.multipliers[id])));
+      }),
+  );
+}
+
+/** Both signs of a route that uses reversible steps only, as the other key it may be reported under. */
+function withBothSigns(keys: Set<string>, analysis: MechanismAnalysis): Set<string> {
+  const all = new Set<string>();
+  for (const key of keys) {
+    all.add(key);
+    const terms = key.split(' ').map((term) => term.split('×'));
+    const allReversible = terms.every(([, id]) => analysis.steps.find((step) => step.id === id)?.reversible);
+    if (allReversible) all.add(terms.map(([value, id]) => `${-BigInt(value)}×${id}`).join(' '));
+  }
+  return all;
+}
+
+describe('direct routes (property-based)', () => {
+  it('are exactly the elementary routes found by trying every set of steps', () => {
+    const small = fc.array(step, { minLength: 1, maxLength: 7 });
+    fc.assert(
+      fc.property(small, (steps) => {
+        const analysis = analyseMechanism(text(steps));
+        if (analysis.steps.length === 0) return;
+        const expected = expectedDirectRoutes(analysis);
+        const reported = reportedDirectRoutes(analysis);
+        expect(reported.size).toBe(expected.size);
+        const either = withBothSigns(expected, analysis);
+        for (const key of reported) expect(either).toContain(key);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

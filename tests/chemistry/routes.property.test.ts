@@ -129,10 +129,8 @@ describe('route enthalpies (property-based)', () => {
 // a route is direct exactly when the stoichiometry of the intermediates over its own steps has a null space
 // of dimension one (so no route uses fewer of those steps), and it runs every one-way step forwards
 // (Schuster & Hilgetag, J. Biol. Syst. 2 (1994) 165; from memory). Found here by trying every set of steps.
-function nullVector(columns: Fraction[][]): Fraction[] | null {
-  // Gaussian elimination on rows (intermediates) × columns (steps); a vector only when the nullity is one.
-  const width = columns.length;
-  const rows = columns[0].map((_, row) => columns.map((column) => column[row]));
+/** Gaussian elimination to reduced row echelon form, exactly; returns the pivot columns. */
+function eliminate(rows: Fraction[][], width: number): number[] {
   const pivots: number[] = [];
   let rank = 0;
   for (let column = 0; column < width && rank < rows.length; column += 1) {
@@ -149,6 +147,15 @@ function nullVector(columns: Fraction[][]): Fraction[] | null {
     pivots.push(column);
     rank += 1;
   }
+  return pivots;
+}
+
+function nullVector(columns: Fraction[][]): Fraction[] | null {
+  // Rows (intermediates) × columns (steps); a vector only when the nullity is one.
+  const width = columns.length;
+  const rows = columns[0].map((_, row) => columns.map((column) => column[row]));
+  const pivots = eliminate(rows, width);
+  const rank = pivots.length;
   if (width - rank !== 1) return null;
   const free = [...Array(width).keys()].find((column) => !pivots.includes(column)) as number;
   const vector = Array.from({ length: width }, () => Fraction.ZERO);
@@ -209,6 +216,23 @@ function withBothSigns(keys: Set<string>, analysis: MechanismAnalysis): Set<stri
   }
   return all;
 }
+
+describe('the route basis (property-based)', () => {
+  it('spans every route: the reported routes have rank = steps − rank of the intermediates over the steps', () => {
+    fc.assert(
+      fc.property(mechanism, (steps) => {
+        const analysis = analyseMechanism(text(steps));
+        if (analysis.steps.length === 0) return;
+        const ids = analysis.steps.map((item) => item.id);
+        const stoichiometry = analysis.intermediates.map((key) => ids.map((id) => nu(analysis, id, key)));
+        const nullity = ids.length - eliminate(stoichiometry, ids.length).length;
+        const routes = analysis.routes.map((route) => ids.map((id) => Fraction.of(route.multipliers[id] ?? 0)));
+        expect(eliminate(routes, ids.length).length).toBe(nullity);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
 
 describe('direct routes (property-based)', () => {
   it('are exactly the elementary routes found by trying every set of steps', () => {

@@ -1,5 +1,6 @@
 import type { FormulaPart } from '@grammar/ast';
 import { elementBySymbol } from './elements';
+import { didYouMean } from './formula-spelling';
 
 /** A problem inside a species, placed by its 0-based offset in the species text. */
 export interface FormulaProblem {
@@ -35,7 +36,9 @@ function add(into: Map<string, number>, symbol: string, count: number): void {
 
 function countWord(word: string, offset: number, into: Map<string, number>, problems: FormulaProblem[]): void {
   if (!looksLikeFormula(word)) {
-    const message = `${word} is neither a formula nor a declared name; declare it with "%species ${word} = FORMULA" (or "%species ${word}" for an opaque name)`;
+    // Only a word in one case is a likely typo for a formula (`co`, `ch4`); `Sub` or `Enz` is a name.
+    const hint = word === word.toLowerCase() || word === word.toUpperCase() ? didYouMean(word) : '';
+    const message = `${word} is neither a formula nor a declared name${hint ? ` (${hint})` : ''}; declare it with "%species ${word} = FORMULA" (or "%species ${word}" for an opaque name)`;
     problems.push({ code: 'undeclared-name', offset, found: word, message });
     return;
   }
@@ -44,7 +47,8 @@ function countWord(word: string, offset: number, into: Map<string, number>, prob
     const at = offset + (match.index ?? 0);
     const count = readCount(countText);
     if (!elementBySymbol(symbol)) {
-      const message = `${symbol} in ${word} is not an element symbol (symbols are case-sensitive); a named species must be declared: "%species ${word} = FORMULA"`;
+      const hint = didYouMean(word);
+      const message = `${symbol} in ${word} is not an element symbol (symbols are case-sensitive${hint ? `; ${hint}` : ''}); a named species must be declared: "%species ${word} = FORMULA"`;
       problems.push({ code: 'unknown-element', offset: at, found: symbol, message });
     } else if (count === null) {
       problems.push({ code: 'bad-count', offset: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });

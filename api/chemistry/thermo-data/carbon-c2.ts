@@ -5,6 +5,7 @@ import { ATCT, JANAF, PEDLEY, roughly } from './sources';
 export const CARBON_C2: readonly ThermoRecord[] = [
   { key: 'C2H6', name: 'ethane', dfH: -83.8, uncertainty: 0.3, source: PEDLEY, smiles: 'CC' },
   { key: 'C2H5', name: 'ethyl radical', dfH: 119, uncertainty: 2, source: roughly(ATCT), smiles: 'C[CH2]' },
+  { key: 'C2H5O', name: 'ethoxy radical', dfH: -13, uncertainty: 5, source: roughly(ATCT), smiles: 'CC[O]' },
   { key: 'C2H5O2', name: 'ethylperoxy radical', dfH: -6, uncertainty: 8, source: roughly(ATCT), smiles: 'CCO[O]' },
   { key: 'C2H4', name: 'ethene', dfH: 52.467, uncertainty: 0.3, source: JANAF, smiles: 'C=C' },
   { key: 'C2H2', name: 'ethyne', dfH: 226.731, uncertainty: 0.8, source: JANAF, smiles: 'C#C' },

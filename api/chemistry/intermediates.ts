@@ -70,8 +70,9 @@ export function formedAndConsumedSpecies(stoichiometry: Stoichiometry, species: 
  */
 function asWritten(stoichiometry: Stoichiometry, species: readonly RegisteredSpecies[], terminal: ReadonlySet<string>, initial: readonly string[], productive: (keys: readonly string[]) => boolean): string[] | null {
   const keys = formedAndConsumedSpecies(stoichiometry, species, terminal, 'as-written').map((s) => s.key);
-  const same = keys.length === initial.length && keys.every((key, index) => key === initial[index]);
-  return keys.length > 0 && !same && productive(keys) ? keys : null;
+  // Read as written, a species is formed and consumed only if it is both ways too: the same count
+  // is the same choice, which was already found unproductive.
+  return keys.length > 0 && keys.length < initial.length && productive(keys) ? keys : null;
 }
 
 /**
@@ -109,11 +110,12 @@ export function chooseIntermediates(
   }
   const reactive = initial.filter((s) => s.reactive).map((s) => s.key);
   // Keeping no species cancels nothing: every step would be a route of its own.
-  const written = reactive.length > 0 && productive(reactive) ? null : asWritten(stoichiometry, species, declared.terminal, keys, productive);
+  const reactiveProductive = productive(reactive);
+  const written = reactive.length > 0 && reactiveProductive ? null : asWritten(stoichiometry, species, declared.terminal, keys, productive);
   if (written) {
     const why = `Cancelling them leaves no productive route, releasing one closed-shell neutral species does not help and no reactive species can carry a route, so reversible steps are read in the direction they are written: the species formed and consumed that way are ${listed(written)}. Pin the choice with %terminal or %intermediates.`;
     return { keys: written, explanation: `${base} ${why}`, productive: true };
   }
   const why = `Cancelling them leaves no productive route, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
-  return { keys: reactive, explanation: `${base} ${why}`, productive: productive(reactive) };
+  return { keys: reactive, explanation: `${base} ${why}`, productive: reactiveProductive };
 }

@@ -25,6 +25,11 @@ export interface SpeciesInfo {
   opaque: boolean;
 }
 
+/** hν and M: written in steps, but neither balanced nor cancelled; routes report them aside. */
+export function isAside(species: Pick<SpeciesInfo, 'kind'>): boolean {
+  return species.kind === 'photon' || species.kind === 'third-body';
+}
+
 /** Reserved particles: one shared description each. */
 export const RESERVED: Record<Exclude<ParticleKind, 'species'>, SpeciesInfo> = {
   photon: reserved('hν', 'photon', 0, 0),

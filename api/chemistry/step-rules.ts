@@ -1,6 +1,7 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { flatText } from './flat-text';
+import { isAside } from './species-model';
 import { termsOf, type StepModel, type StepTerm } from './step-model';
 
 /** The step's class from the change in radical count (analysis.md, "Steps"). */
@@ -41,10 +42,6 @@ function thirdBodyCount(terms: readonly StepTerm[]): number {
   return term ? term.coef : 0;
 }
 
-function aside(term: StepTerm): boolean {
-  return term.species.kind === 'photon' || term.species.kind === 'third-body';
-}
-
 function sameTermOn(terms: readonly StepTerm[], wanted: StepTerm): boolean {
   for (const term of terms) if (term.key === wanted.key && term.coef === wanted.coef) return true;
   return false;
@@ -54,12 +51,12 @@ function sameTermOn(terms: readonly StepTerm[], wanted: StepTerm): boolean {
 export function changesNothing(step: StepModel): boolean {
   let count = 0;
   for (const term of step.reactants) {
-    if (aside(term)) continue;
+    if (isAside(term.species)) continue;
     if (!sameTermOn(step.products, term)) return false;
     count += 1;
   }
   let productCount = 0;
-  for (const term of step.products) if (!aside(term)) productCount += 1;
+  for (const term of step.products) if (!isAside(term.species)) productCount += 1;
   return count === productCount;
 }
 

@@ -1,4 +1,5 @@
 import { Fraction, lcm } from './fraction';
+import { isAside } from './species-model';
 import { rank, type SparseRow } from './integer-matrix';
 import { netOf, termsOf, type StepModel } from './step-model';
 
@@ -22,7 +23,7 @@ export function buildStoichiometry(steps: readonly StepModel[]): Stoichiometry {
   const columns: Map<string, Fraction>[] = [];
   steps.forEach((step, index) => {
     for (const term of termsOf(step)) {
-      if (term.species.kind === 'photon' || term.species.kind === 'third-body') aside.add(term.species.key);
+      if (isAside(term.species)) aside.add(term.species.key);
     }
     const column = netOf(step);
     columns.push(column);

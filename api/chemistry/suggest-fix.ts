@@ -1,6 +1,6 @@
 import { Fraction } from './fraction';
 import { nullSpace, type SparseRow } from './integer-matrix';
-import type { SpeciesInfo } from './species-model';
+import { isAside, type SpeciesInfo } from './species-model';
 import type { StepModel, StepTerm } from './step-model';
 
 /**
@@ -114,10 +114,6 @@ function additionFixes(step: StepModel, diff: Vector, candidates: readonly Candi
   return fixes;
 }
 
-function aside(term: StepTerm): boolean {
-  return term.species.kind === 'photon' || term.species.kind === 'third-body';
-}
-
 /**
  * New coefficients for all the species of the step, when exactly one set of positive whole numbers
  * balances it (CH4 + O2 → CO2 + H2O becomes CH4 + 2 O2 → CO2 + 2 H2O): the exact null space of
@@ -126,12 +122,12 @@ function aside(term: StepTerm): boolean {
 function rebalanced(step: StepModel): BalancingFix | null {
   const terms = [...step.reactants, ...step.products];
   if (terms.some((term) => term.species.opaque)) return null;
-  const columns = terms.map((term, index) => ({ term, index, sign: index < step.reactants.length ? -1n : 1n })).filter(({ term }) => !aside(term));
+  const columns = terms.map((term, index) => ({ term, index, sign: index < step.reactants.length ? -1n : 1n })).filter(({ term }) => !isAside(term.species));
   const rows = new Map<string, SparseRow>();
   columns.forEach(({ term, sign }, column) => {
     for (const [dimension, count] of composition(term.species)) {
       const row = rows.get(dimension) ?? new Map<number, bigint>();
-      row.set(column, sign * BigInt(count.toNumber()));
+      row.set(column, sign * count.num); // counts of atoms, charge and sites are whole numbers
       rows.set(dimension, row);
     }
   });
@@ -162,7 +158,7 @@ function wholeNumbers(fix: BalancingFix): boolean {
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);
   if (diff.size === 0) return null;
-  const usable = [...mechanismSpecies, ...COMMON_SMALL_SPECIES].filter((c) => !c.opaque && c.kind !== 'photon' && c.kind !== 'third-body');
+  const usable = [...mechanismSpecies, ...COMMON_SMALL_SPECIES].filter((c) => !c.opaque && !isAside(c));
   const single = coefficientFixes(step, diff);
   const added = additionFixes(step, diff, usable);
   return single.find(wholeNumbers) ?? rebalanced(step) ?? added.find(wholeNumbers) ?? single[0] ?? added[0] ?? null;

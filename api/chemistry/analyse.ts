@@ -6,6 +6,8 @@ import { cachedLookup, declaredNamesLookup, enthalpyOf } from './enthalpy';
 import { formedAndConsumedKeys } from './formed-and-consumed';
 import { readDirectives, type MechanismSettings } from './directives';
 import { reportRadicalMarks } from './radical-marks';
+import { reportTwoSpellings } from './species-spellings';
+import { chainCarriers } from './chain-carriers';
 import { reportRates } from './rate-check';
 import { analyseRoutes, type RouteAnalysis } from './route-report';
 import { assignRoles } from './roles';
@@ -13,6 +15,7 @@ import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
 import type { StepModel } from './step-model';
 import { StepPass } from './step-pass';
 import { buildStoichiometry } from './stoichiometry';
+import { stepsForRoutes } from './route-steps';
 import { builtinEnthalpy, type EnthalpyLookup } from './thermo';
 import { resolveDirectiveSpecies } from './directive-species';
 import { sortDiagnostics } from './diagnostic-order';
@@ -75,7 +78,10 @@ function speciesJson(item: RegisteredSpecies, role: SpeciesRole, lookup: Enthalp
 
 function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: RegisteredSpecies[], settings: { intermediates: string[] | null; terminal: Set<string> }, lookup: EnthalpyLookup, maxRouteSteps: number, diagnostics: Diagnostic[]): RouteAnalysis {
   if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) {
-    const context = { steps, stoichiometry: buildStoichiometry(steps), stepDH: stepJson.map((step) => step.dH), stepBalanced: stepJson.map((step) => step.balanced), lookup, diagnostics };
+    const used = stepsForRoutes(steps, diagnostics);
+    if (used.length === 0) return noRouteSteps(species, steps);
+    const json = used.map((step) => stepJson[step.index]);
+    const context = { steps: used, stoichiometry: buildStoichiometry(used), stepDH: json.map((step) => step.dH), stepBalanced: json.map((step) => step.balanced), lookup, diagnostics };
     return analyseRoutes(context, species, settings, maxRouteSteps);
   }
   const intermediates = formedAndConsumedKeys(species, settings.terminal);
@@ -83,6 +89,11 @@ function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: Registe
   diagnostics.push(finding('routes-too-large', steps[0], message));
   const explanation = `Species both formed and consumed: ${intermediates.length}. Routes were not computed (${message}), so this choice was not checked for productive routes.`;
   return { intermediates, explanation, routes: [], overall: null, roles: assignRoles(species, steps, null, new Map()) };
+}
+
+function noRouteSteps(species: RegisteredSpecies[], steps: StepModel[]): RouteAnalysis {
+  const explanation = 'Every step has an error that keeps it out of the routes, so there are no intermediates and no routes.';
+  return { intermediates: [], explanation, routes: [], overall: null, roles: assignRoles(species, steps, null, new Map()) };
 }
 
 function emptyRoutes(diagnostics: Diagnostic[]): RouteAnalysis {
@@ -101,6 +112,7 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
   const { steps, json: stepJson } = pass;
   const species = registry.all();
   reportRadicalMarks(species, diagnostics);
+  reportTwoSpellings(species, lookup, diagnostics);
   pass.missingEnthalpies.report(diagnostics);
   reportRates(steps, text, diagnostics);
   const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
@@ -115,6 +127,7 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
     species: species.map((item) => speciesJson(item, routes.roles.get(item.key) ?? 'unused', lookup)),
     intermediates: routes.intermediates,
     intermediatesExplanation: routes.explanation,
+    chainCarriers: chainCarriers(steps, stepJson, species),
     terminalSpecies: [...declared.terminal],
     routes: routes.routes,
     overall: routes.overall,

@@ -71,6 +71,8 @@ export interface RouteJson {
   dHFromNet: number | null;
   direct: boolean;
   basis: boolean;
+  /** Ids of the one-way steps this route runs backwards (σ < 0): empty for a route that can occur as written. */
+  reversesOneWay: string[];
 }
 
 /** The machine-readable result of `check --json` and `POST /api/analyse` (analysis.md). */
@@ -82,6 +84,8 @@ export interface MechanismAnalysis {
   species: SpeciesJson[];
   intermediates: string[];
   intermediatesExplanation: string;
+  /** Radicals that chain-carrying steps (propagation, branching) both consume and form again. */
+  chainCarriers: string[];
   terminalSpecies: string[];
   routes: RouteJson[];
   overall: number | null;

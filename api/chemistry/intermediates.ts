@@ -113,9 +113,11 @@ export function chooseIntermediates(
   const reactiveProductive = productive(reactive);
   const written = reactive.length > 0 && reactiveProductive ? null : asWritten(stoichiometry, species, declared.terminal, keys, productive);
   if (written) {
-    const why = `Cancelling them leaves no productive route, releasing one closed-shell neutral species does not help and no reactive species can carry a route, so reversible steps are read in the direction they are written: the species formed and consumed that way are ${listed(written)}. Pin the choice with %terminal or %intermediates.`;
+    const why = `Cancelling them leaves no productive route that runs every one-way step forwards, releasing one closed-shell neutral species does not help and no reactive species can carry a route, so reversible steps are read in the direction they are written: the species formed and consumed that way are ${listed(written)}. Pin the choice with %terminal or %intermediates.`;
     return { keys: written, explanation: `${base} ${why}`, productive: true };
   }
-  const why = `Cancelling them leaves no productive route, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
+  const why = reactive.length === keys.length
+    ? `Cancelling them leaves no productive route that runs every one-way step forwards and releasing one closed-shell neutral species does not help; all of them are reactive (radicals, excited or adsorbed species, sites, ions), so all are kept. Pin the choice with %terminal or %intermediates.`
+    : `Cancelling them leaves no productive route that runs every one-way step forwards, and releasing one closed-shell neutral species does not help, so only the reactive species (radicals, excited or adsorbed species, sites, ions) are kept: ${listed(reactive)}. Pin the choice with %terminal or %intermediates.`;
   return { keys: reactive, explanation: `${base} ${why}`, productive: reactiveProductive };
 }

@@ -27,7 +27,7 @@ export class MissingEnthalpies {
     if (!this.firstStep) return;
     const names = this.keys;
     const shown = names.slice(0, 20).join(', ') + (names.length > 20 ? `, and ${names.length - 20} more` : '');
-    diagnostics.push(finding('enthalpy-missing', this.firstStep, `no enthalpy of formation for ${shown}; ΔH of the steps with them is left empty`, { found: names[0] }));
+    diagnostics.push(finding('enthalpy-missing', this.firstStep, `no enthalpy of formation for ${shown}; ΔH of the steps with ${names.length === 1 ? 'it' : 'them'} is left empty`, { found: names[0] }));
   }
 }
 

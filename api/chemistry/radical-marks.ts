@@ -4,6 +4,13 @@ import { speciesKey } from './species-model';
 import { counted } from './wording';
 import type { RegisteredSpecies } from './species-registry';
 
+/** The key with one radical mark, where the notation puts it: after the state tags, before charge and sites (`IO(aq)•`). */
+function markedKey(item: RegisteredSpecies): string {
+  if (item.name) return speciesKey(item.name, [], 1, item.charge, item.sites);
+  const chargeAndSites = speciesKey('', [], 0, item.charge, item.sites);
+  return `${item.key.slice(0, item.key.length - chargeAndSites.length)}•${chargeAndSites}`;
+}
+
 /**
  * Radical bookkeeping per species, reported once at its first appearance: an odd electron
  * count without a mark (often deliberate: NO, NO2, ClO), or a mark on an even-electron species
@@ -15,11 +22,11 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
     const position = { line: item.firstLine, column: item.firstColumn };
     const odd = item.electrons % 2 === 1;
     if (odd && item.radicalMarks === 0) {
-      const marked = speciesKey(item.name ?? item.formula, [], 1, item.charge, item.sites);
+      const marked = markedKey(item);
       const message = `${item.key} has ${counted(item.electrons, 'electron')}; mark it as a radical (${marked}) or ignore`;
       diagnostics.push(finding('odd-electrons-unmarked', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {
-      const message = `${item.key} has ${item.electrons} electrons (even); give the state a tag, e.g. ${item.formula}(3P), or drop the mark`;
+      const message = `${item.key} has ${item.electrons} electrons (even); to count it as a radical give the state a tag and keep the mark, e.g. ${item.formula}(3P)•, or drop the mark`;
       diagnostics.push(finding('even-electrons-marked', position, message, { found: item.key }));
     }
   }

@@ -27,7 +27,8 @@ function routeSum(multipliers: Record<string, number>): string {
 
 function routeLine(route: RouteJson, index: number, overall: number | null): string {
   const numbers = routeSum(route.multipliers);
-  const tags = [route.kind, route.direct ? 'direct' : null, index === overall ? 'overall' : null].filter(Boolean).join(', ');
+  const backwards = route.reversesOneWay.length > 0 ? `runs ${route.reversesOneWay.join(', ')} backwards` : null;
+  const tags = [route.kind, route.direct ? 'direct' : null, index === overall ? 'overall' : null, backwards].filter(Boolean).join(', ');
   // Photons are reactants only and M cancels, so what is left aside is the light the route absorbs.
   const aside = Object.entries(route.aside).map(([key, value]) => `${Math.abs(value)} ${key} ${value < 0 ? 'absorbed' : 'given off'}`).join(', ');
   return `  ${index + 1}. ${numbers}\n     net: ${route.net}${aside ? ` (${aside})` : ''}; ${kj(route.dH)} [${tags}]`;
@@ -38,9 +39,10 @@ export function formatReport(analysis: MechanismAnalysis, fileName: string): str
   const lines: string[] = [`${analysis.title ?? fileName}`, ''];
   lines.push(`Steps (${analysis.steps.length}):`, ...analysis.steps.map(stepLine), '');
   lines.push(`Intermediates: ${analysis.intermediates.join(', ') || 'none'}`, `  ${analysis.intermediatesExplanation}`, '');
+  lines.push(`Chain carriers: ${analysis.chainCarriers.join(', ') || 'none'}`, '');
   lines.push(`Routes (${analysis.routes.length}):`, ...analysis.routes.map((route, index) => routeLine(route, index, analysis.overall)), '');
   const roles = analysis.species.map((species) => `${species.key} ${species.role}`);
-  lines.push(`Roles: ${roles.join('; ')}`, '');
+  lines.push(`Roles: ${roles.join('; ') || 'none'}`, '');
   const counts = { error: 0, warning: 0, info: 0 };
   for (const item of analysis.diagnostics) counts[item.severity] += 1;
   lines.push(`Diagnostics: ${counted(counts.error, 'error')}, ${counted(counts.warning, 'warning')}, ${counted(counts.info, 'note')}`);

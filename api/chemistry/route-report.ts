@@ -54,7 +54,31 @@ function routeJson(sigma: bigint[], flags: { direct: boolean; basis: boolean }, 
   const multipliers: Record<string, number> = {};
   sigma.forEach((value, index) => value !== 0n && (multipliers[steps[index].id] = Number(value)));
   const kind = net.size > 0 ? 'productive' : 'null-cycle';
-  return { multipliers, net: netText(net), netSpecies: numbers(net), aside: numbers(aside), kind, dH: enthalpy.dH, dHFromSteps: enthalpy.fromSteps, dHFromNet: enthalpy.fromNet, ...flags };
+  const reversesOneWay = steps.filter((step, index) => sigma[index] < 0n && !step.reversible).map((step) => step.id);
+  return { multipliers, net: netText(net), netSpecies: numbers(net), aside: numbers(aside), kind, dH: enthalpy.dH, dHFromSteps: enthalpy.fromSteps, dHFromNet: enthalpy.fromNet, ...flags, reversesOneWay };
+}
+
+/**
+ * Productive routes that run a one-way step backwards, named once: such a route cannot occur as
+ * written. (A null cycle that does, such as a step against its own duplicate, changes nothing.)
+ */
+function reportReversedRoutes(routes: readonly RouteJson[], context: RouteContext): void {
+  const reversing = routes.map((route, index) => ({ route, number: index + 1 })).filter(({ route }) => route.kind === 'productive' && route.reversesOneWay.length > 0);
+  if (reversing.length === 0) return;
+  const listedRoutes = reversing.map(({ route, number }) => `route ${number} (${route.reversesOneWay.join(', ')})`).join('; ');
+  const feasible = routes.some((route) => route.kind === 'productive' && route.reversesOneWay.length === 0);
+  const hint = feasible ? '' : '; no productive route runs every one-way step forwards: a step may be missing (a termination, say), or pin the intermediates with %intermediates or %terminal';
+  const message = `${reversing.length === 1 ? 'a route runs' : 'routes run'} a one-way step backwards, so ${reversing.length === 1 ? 'it cannot' : 'they cannot'} occur as written: ${listedRoutes}${hint}`;
+  context.diagnostics.push(finding('route-reverses-one-way-step', context.steps[0], message));
+}
+
+/** The route roles are read from: the overall route when productive, else the first productive route that runs no one-way step backwards, else the first productive one. */
+function roleRoute(routes: readonly RouteJson[], overall: number | null): number | null {
+  if (overall !== null && routes[overall].kind === 'productive') return overall;
+  const forwards = routes.findIndex((route) => route.kind === 'productive' && route.reversesOneWay.length === 0);
+  if (forwards >= 0) return forwards;
+  const any = routes.findIndex((route) => route.kind === 'productive');
+  return any >= 0 ? any : null;
 }
 
 function reportRouteNotes(set: RouteSet, productive: boolean, maxRouteSteps: number, context: RouteContext): void {
@@ -78,10 +102,10 @@ export function analyseRoutes(
   const set = findRoutes(context.stoichiometry, choice.keys, maxRouteSteps);
   const routes = set.routes.map(({ sigma, direct, basis }) => routeJson(sigma, { direct, basis }, context));
   reportRouteNotes(set, routes.some((route) => route.kind === 'productive'), maxRouteSteps, context);
-  const overallProductive = set.overall !== null && routes[set.overall].kind === 'productive';
-  const roleIndex = overallProductive ? set.overall : routes.findIndex((route) => route.kind === 'productive');
-  const sigma = roleIndex !== null && roleIndex >= 0 ? set.routes[roleIndex].sigma : null;
+  reportReversedRoutes(routes, context);
+  const roleIndex = roleRoute(routes, set.overall);
+  const sigma = roleIndex !== null ? set.routes[roleIndex].sigma : null;
   const net = sigma ? netOfRoute(context.stoichiometry, sigma, context.stoichiometry.aside) : new Map<string, Fraction>();
-  const roles = assignRoles(species, context.steps, sigma, net);
+  const roles = assignRoles(species, context.steps, sigma, net, new Set(choice.keys));
   return { intermediates: choice.keys, explanation: choice.explanation, routes, overall: set.overall, roles };
 }

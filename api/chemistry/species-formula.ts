@@ -48,7 +48,7 @@ function countWord(word: string, offset: number, into: Map<string, number>, prob
     const count = readCount(countText);
     if (!elementBySymbol(symbol)) {
       const hint = didYouMean(word);
-      const message = `${symbol} in ${word} is not an element symbol (symbols are case-sensitive${hint ? `; ${hint}` : ''}); a named species must be declared: "%species ${word} = FORMULA"`;
+      const message = `${symbol === word ? symbol : `${symbol} in ${word}`} is not an element symbol (symbols are case-sensitive${hint ? `; ${hint}` : ''}); a named species must be declared: "%species ${word} = FORMULA"`;
       problems.push({ code: 'unknown-element', offset: at, found: symbol, message });
     } else if (count === null) {
       problems.push({ code: 'bad-count', offset: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });

@@ -37,7 +37,10 @@ function fixedEquation(step: StepModel, fix: BalancingFix): string {
   const side = (terms: StepTerm[], name: 'reactants' | 'products') => {
     const touched = (term: StepTerm) => fix.side === name && term.key === fix.key;
     const kept = fix.kind === 'remove' ? terms.filter((term) => !touched(term)) : terms;
-    const list: ShownTerm[] = kept.map((term) => (fix.kind === 'coefficient' && touched(term) ? { key: term.key, coef: fix.to } : term));
+    const list: ShownTerm[] = kept.map((term) => {
+      if (fix.kind === 'coefficient' && touched(term)) return { key: term.key, coef: fix.to };
+      return fix.kind === 'replace' && touched(term) ? { key: fix.by, coef: term.fraction } : term;
+    });
     if (fix.kind === 'add' && fix.side === name) list.push({ key: fix.key, coef: fix.coef });
     return list;
   };
@@ -53,7 +56,9 @@ function reportFix(step: StepModel, candidates: readonly SpeciesInfo[], diagnost
       ? `${fix.to.toString()} ${fix.key} instead of ${fix.from.toString()} ${fix.key} among the ${fix.side}`
       : fix.kind === 'remove'
         ? `${fix.coef.toString()} ${fix.key} removed from the ${fix.side}`
-        : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
+        : fix.kind === 'replace'
+          ? `${fix.by} instead of ${fix.key} among the ${fix.side}`
+          : `${fix.coef.toString()} ${fix.key} added to the ${fix.side}`;
   const fixed = fixedEquation(step, fix);
   diagnostics.push(finding('suggested-fix', step, `step ${step.id} balances with ${change}: ${fixed}`, { expected: [fixed] }));
 }

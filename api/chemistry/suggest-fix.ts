@@ -1,6 +1,6 @@
 import { Fraction } from './fraction';
 import { nullSpace, type SparseRow } from './integer-matrix';
-import { isAside, type SpeciesInfo } from './species-model';
+import { isAside, speciesKey, type SpeciesInfo } from './species-model';
 import type { StepModel, StepTerm } from './step-model';
 
 /**
@@ -11,7 +11,8 @@ export type BalancingFix =
   | { kind: 'coefficient'; side: 'reactants' | 'products'; key: string; from: Fraction; to: Fraction }
   | { kind: 'coefficients'; reactants: Fraction[]; products: Fraction[] }
   | { kind: 'remove'; side: 'reactants' | 'products'; key: string; coef: Fraction }
-  | { kind: 'add'; side: 'reactants' | 'products'; key: string; coef: Fraction };
+  | { kind: 'add'; side: 'reactants' | 'products'; key: string; coef: Fraction }
+  | { kind: 'replace'; side: 'reactants' | 'products'; key: string; by: string };
 
 type Vector = Map<string, Fraction>;
 type Candidate = Pick<SpeciesInfo, 'key' | 'kind' | 'elements' | 'charge' | 'sites' | 'opaque'>;
@@ -144,22 +145,94 @@ function rebalanced(step: StepModel): BalancingFix | null {
 }
 
 function wholeNumbers(fix: BalancingFix): boolean {
-  if (fix.kind === 'coefficients') return true;
+  if (fix.kind === 'coefficients' || fix.kind === 'replace') return true;
   return fix.kind === 'coefficient' ? fix.to.isInteger() : fix.coef.isInteger();
 }
 
+/** How far a single-term fix moves the coefficient (2 O2 → O2 is a smaller change than O → 3 O). */
+function size(fix: BalancingFix): Fraction {
+  if (fix.kind === 'coefficient') {
+    const change = fix.to.sub(fix.from);
+    return change.sign() < 0 ? change.neg() : change;
+  }
+  return fix.kind === 'remove' ? fix.coef : Fraction.ZERO;
+}
+
+function smallestFirst(fixes: BalancingFix[]): BalancingFix[] {
+  return fixes.map((fix, order) => ({ fix, order })).sort((a, b) => size(a.fix).sub(size(b.fix)).sign() || a.order - b.order).map(({ fix }) => fix);
+}
+
+function sameElements(a: Candidate, b: Candidate): boolean {
+  const symbols = Object.keys(a.elements);
+  return symbols.length === Object.keys(b.elements).length && symbols.every((symbol) => a.elements[symbol] === b.elements[symbol]);
+}
+
 /**
- * A small change that balances an unbalanced step, in this order of preference: a new whole
- * coefficient for one of its terms (or the term removed); new whole coefficients for all its
- * species, when only one such set exists; one added species in a whole amount (the mechanism's own
- * species first, then common small ones); then the same changes in fractions. Null when no such
- * change balances the step.
+ * When only charge or sites are off, one species written with the wrong charge is the usual slip
+ * (`IO(aq)` for `IO(aq)^-`): a species of the mechanism with the same elements whose charge and
+ * sites make up the difference replaces it.
+ */
+function replacementFixes(step: StepModel, diff: Vector, mechanismSpecies: readonly Candidate[]): BalancingFix[] {
+  if ([...diff.keys()].some((dimension) => dimension !== CHARGE && dimension !== SITES)) return [];
+  const fixes: BalancingFix[] = [];
+  const sides = [['reactants', step.reactants, Fraction.ONE.neg(), step.products], ['products', step.products, Fraction.ONE, step.reactants]] as const;
+  for (const [side, terms, sign, opposite] of sides) {
+    for (const term of terms) {
+      if (isAside(term.species) || term.species.opaque) continue;
+      for (const other of [...mechanismSpecies, ...chargedForms(term.species)]) {
+        if (other.key === term.species.key || other.opaque || !sameElements(other, term.species)) continue;
+        // Fe^3+ → Fe^2+ is not fixed by writing Fe^2+ on both sides.
+        if (opposite.some((written) => written.key === other.key)) continue;
+        // Replacing changes the total by sign · coef · (other − this) in charge and sites.
+        const chargeChange = term.fraction.mul(Fraction.of(other.charge - term.species.charge)).mul(sign);
+        const siteChange = term.fraction.mul(Fraction.of(other.sites - term.species.sites)).mul(sign);
+        const charge = (diff.get(CHARGE) ?? Fraction.ZERO).add(chargeChange);
+        const sites = (diff.get(SITES) ?? Fraction.ZERO).add(siteChange);
+        if (charge.isZero() && sites.isZero()) fixes.push({ kind: 'replace', side, key: term.species.key, by: other.key });
+      }
+    }
+  }
+  return fixes;
+}
+
+/**
+ * An odd-electron species written without a radical mark whose charge was left out: one more or
+ * one less electron makes it closed-shell, as in `IO(aq)` for the hypoiodite `IO(aq)^-`.
+ */
+function chargedForms(species: StepTerm['species']): Candidate[] {
+  if (species.kind !== 'species' || species.name || species.radicalMarks > 0 || species.electrons === null || species.electrons % 2 === 0) return [];
+  const chargeAndSites = speciesKey('', [], 0, species.charge, species.sites);
+  const base = species.key.slice(0, species.key.length - chargeAndSites.length);
+  return [species.charge - 1, species.charge + 1].map((charge) => ({ ...small(`${base}${speciesKey('', [], 0, charge, species.sites)}`, species.elements, charge, species.sites) }));
+}
+
+/**
+ * A free electron is offered only where it can be meant: in a mechanism that already writes
+ * electrons, or for a step that is off in charge alone (a half-reaction, Fe^3+ → Fe^2+). Elsewhere
+ * (a homogeneous step that is also off in atoms) a free electron is no fix a chemist would make.
+ */
+function offeredSmallSpecies(mechanismSpecies: readonly Candidate[], diff: Vector): readonly Candidate[] {
+  const chargeOnly = diff.size === 1 && diff.has(CHARGE);
+  const electrons = chargeOnly || mechanismSpecies.some((species) => species.kind === 'electron');
+  return electrons ? COMMON_SMALL_SPECIES : COMMON_SMALL_SPECIES.filter((species) => species.kind !== 'electron');
+}
+
+/**
+ * A small change that balances an unbalanced step, in this order of preference: a species of the
+ * mechanism written with the right charge or sites in place of one with the wrong ones; a new whole
+ * coefficient for one of its terms (or the term removed), the smallest change first; new whole
+ * coefficients for all its species, when only one such set exists; one added species in a whole
+ * amount (the mechanism's own species first, then common small ones; a free electron only where
+ * the mechanism writes electrons); then the same changes in fractions. Null when no such change
+ * balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);
   if (diff.size === 0) return null;
-  const usable = [...mechanismSpecies, ...COMMON_SMALL_SPECIES].filter((c) => !c.opaque && !isAside(c));
-  const single = coefficientFixes(step, diff);
+  const replaced = replacementFixes(step, diff, mechanismSpecies);
+  if (replaced.length > 0) return replaced[0];
+  const usable = [...mechanismSpecies, ...offeredSmallSpecies(mechanismSpecies, diff)].filter((c) => !c.opaque && !isAside(c));
+  const single = smallestFirst(coefficientFixes(step, diff));
   const added = additionFixes(step, diff, usable);
   return single.find(wholeNumbers) ?? rebalanced(step) ?? added.find(wholeNumbers) ?? single[0] ?? added[0] ?? null;
 }

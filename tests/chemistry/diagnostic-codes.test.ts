@@ -4,10 +4,15 @@ import { DIAGNOSTIC_CODES, type DiagnosticCode } from '@api/chemistry/diagnostic
 import { MAX_RATE_CHECK_STEPS } from '@api/chemistry/rate-check';
 import { generateMechanism } from '../../examples/generate-large';
 
-/** Thirty steps with three parallel ways from each carbon cluster to the next: 3^10 direct routes. */
+/**
+ * Thirty steps with three parallel ways from each stage to the next: 3^10 direct routes. The
+ * stages are opaque names, so the steps balance (a step that does not is left out of the routes).
+ */
 function explodingMechanism(): string {
   const lines: string[] = [];
-  for (let i = 1; i <= 10; i += 1) for (let j = 1; j <= 3; j += 1) lines.push(`C${i} -> C${i + 1} + H${j}`);
+  for (let i = 1; i <= 11; i += 1) lines.push(`%species Stage${i}`);
+  for (let j = 1; j <= 3; j += 1) lines.push(`%species Side${j}`);
+  for (let i = 1; i <= 10; i += 1) for (let j = 1; j <= 3; j += 1) lines.push(`Stage${i} -> Stage${i + 1} + Side${j}`);
   return lines.join('\n');
 }
 
@@ -45,7 +50,10 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'no-steps': { text: '# nothing yet', line: 1, column: 1 },
   'routes-too-large': { text: () => generateMechanism(MAX_ROUTE_ANALYSIS_STEPS + 1), line: 3, column: 1 },
   'direct-routes-skipped': { text: () => generateMechanism(41), line: 3, column: 1 },
-  'direct-routes-limit': { text: explodingMechanism, line: 1, column: 1 },
+  'direct-routes-limit': { text: explodingMechanism, line: 15, column: 1 },
+  'steps-left-out-of-routes': { text: 'X1: O3 + hν -> O2 + O(3P)\nX2: O(3P) + O2 -> O3 + O', line: 2, column: 1 },
+  'route-reverses-one-way-step': { text: 'R1: H2 + O2 -> HO2• + H•\nR2: H• + O2 -> OH• + O(3P)\nR3: O(3P) + H2 -> OH• + H•\nR4: OH• + H2 -> H2O + H•', line: 1, column: 1 },
+  'species-two-spellings': { text: 'O3 + hν -> O2 + O(3P)\nO + O3 -> 2 O2', line: 2, column: 1 },
   'no-productive-route': { text: '%intermediates O3, O2, O(3P)\nO3 + hν -> O2 + O(3P)\nO(3P) + O2 + M -> O3 + M', line: 2, column: 1 },
   'enthalpy-missing': { text: 'CO + * -> CO*', line: 1, column: 1 },
   // `exp(` is never closed: mathjs finds the end of the expression at its 15th character.

@@ -1,6 +1,7 @@
 import type { Token } from 'moo';
 import type { FormulaPart, ParticleNode, SourceToken, SpeciesNode } from './ast';
 import { diagnostic, PARSER_CODES, type Diagnostic } from './diagnostics';
+import { scientificCoefficientMessage } from './syntax-errors';
 import { flatten, type Cons, type RawMark, type RawPart, type RawParticle, type RawSpecies, type TokenRef } from './raw';
 
 /** Where converted nodes come from: the line number, its text and its tokens. */
@@ -107,6 +108,14 @@ function speciesEnd(parts: RawPart[], states: TokenRef[], marks: RawMark[], cont
 function reportBlank(text: string, start: number, context: LineContext): void {
   const blank = text.search(/\s/);
   if (blank < 0) return;
+  // `1e400 O2` reads as the number 1 and a species `e400 O2`: the number's exponent is the slip.
+  const mantissa = /\d+(?:\.\d+)?$/.exec(context.text.slice(0, start))?.[0];
+  const exponent = /^[eE][+-]?\d+/.exec(text)?.[0];
+  if (mantissa && exponent) {
+    const message = scientificCoefficientMessage(mantissa + exponent);
+    context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, { line: context.line, column: start - mantissa.length + 1 }, message, { found: mantissa + exponent }));
+    return;
+  }
   const position = { line: context.line, column: start + blank + 1 };
   const message = `a species is written without blanks: "${text}"`;
   context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, position, message, { found: text, expected: [text.replace(/\s+/g, '')] }));

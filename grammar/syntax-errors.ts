@@ -121,6 +121,30 @@ const RESERVED_WORDS: Record<string, string> = {
   electron: 'an electron',
 };
 
+// A number in scientific notation standing where a coefficient stands (before any `@`): at the
+// start of a side, after a label's colon, a `+` or an arrow.
+const SCIENTIFIC_COEFFICIENT = /(?:^|[:+>→⇌]|\s)\s*(\d+(?:\.\d+)?[eE][+-]?\d+)\s+\S/;
+
+/** A coefficient written in scientific notation (`1e-3 O2`), which the notation does not read, with its column. */
+export function scientificCoefficient(lineText: string): { text: string; column: number } | null {
+  const equation = lineText.split('@')[0];
+  const match = SCIENTIFIC_COEFFICIENT.exec(equation);
+  if (!match) return null;
+  return { text: match[1], column: match.index + match[0].indexOf(match[1]) + 1 };
+}
+
+/** The message for a coefficient in scientific notation. */
+export function scientificCoefficientMessage(text: string): string {
+  return `coefficient ${text} is in scientific notation; a coefficient is a whole number, decimal or fraction (scientific notation belongs to rate expressions after @)`;
+}
+
+function directiveLine(lineText: string): boolean {
+  return lineText.trimStart().startsWith('%');
+}
+
+// An arrow anywhere before the rate: without one, "the line ends too early" says too little.
+const ANY_ARROW = /->|→|<=>|⇌/;
+
 /** A syntax error at a token (or at the end of the line when `token` is null). */
 export function syntaxDiagnostic(
   line: number,
@@ -128,12 +152,16 @@ export function syntaxDiagnostic(
   lineText: string,
   expected: string[],
 ): Diagnostic {
+  const scientific = scientificCoefficient(lineText);
+  if (scientific) {
+    return diagnostic('error', PARSER_CODES.syntaxError, { line, column: scientific.column }, scientificCoefficientMessage(scientific.text), { found: scientific.text, expected });
+  }
   const found = token ? (token.type === 'invalid' ? token.text[0] : token.text) : 'end of line';
   const shown = visible(found);
   const column = token ? token.col : lineText.trimEnd().length + 1;
-  const what = token?.type === 'invalid' ? `unexpected character ${shown}` : token ? `unexpected '${found}'` : 'the line ends too early';
-  const directiveLine = lineText.trimStart().startsWith('%');
-  const lookAlike = token && !(directiveLine && found === '=') ? LOOK_ALIKES[found] : undefined;
+  const noArrow = !token && !directiveLine(lineText) && !ANY_ARROW.test(lineText.split('@')[0]);
+  const what = token?.type === 'invalid' ? `unexpected character ${shown}` : token ? `unexpected '${found}'` : noArrow ? 'the line ends too early: the step has no arrow between its reactants and products' : 'the line ends too early';
+  const lookAlike = token && !(directiveLine(lineText) && found === '=') ? LOOK_ALIKES[found] : undefined;
   // Only where a name was wanted and the reserved word itself was not: `%species M = N2`, not `O + M M`.
   const nameWanted = expected.includes(TOKEN_NAMES.word) && !expected.includes(TOKEN_NAMES[token?.type ?? ''] ?? '');
   const reserved = token && !lookAlike && nameWanted ? RESERVED_WORDS[token.type ?? ''] : undefined;

@@ -168,6 +168,20 @@ describe('parseMechanism: rejected notation', () => {
     expect(message('O + M M -> O + M')).toBe("unexpected 'M'; expected '+', an arrow (->, →, <=>, ⇌)");
   });
 
+  it('says a coefficient in scientific notation is not one, at the coefficient, once per coefficient', () => {
+    const found = (line: string) => parseMechanism(line).diagnostics.map((d) => [d.column, d.message.split(';')[0]]);
+    expect(found('A1: 1e400 O2 -> 2e400 O(3P)')).toEqual([[5, 'coefficient 1e400 is in scientific notation'], [17, 'coefficient 2e400 is in scientific notation']]);
+    expect(found('1e-3 O2 -> 2e-3 O(3P)')).toEqual([[1, 'coefficient 1e-3 is in scientific notation']]);
+    // In a rate expression scientific notation is what is written.
+    expect(parseMechanism('O3 + hν -> O2 + O(3P) @ 1e-5').diagnostics).toEqual([]);
+  });
+
+  it('says when a step has no arrow at all', () => {
+    const [error] = parseMechanism('Cl• + O3 ClO• + O2').diagnostics;
+    expect(error.message).toContain('the step has no arrow between its reactants and products');
+    expect(parseMechanism('Cl• + O3 -> ClO• +').diagnostics[0].message).not.toContain('no arrow');
+  });
+
   it('reports a line that is too long without reading it', () => {
     const [error] = parseMechanism(`A -> B @ ${'1+'.repeat(2_000)}1`).diagnostics;
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });

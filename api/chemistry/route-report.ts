@@ -69,7 +69,9 @@ function reportReversedRoutes(routes: readonly RouteJson[], context: RouteContex
   const feasible = routes.some((route) => route.kind === 'productive' && route.reversesOneWay.length === 0);
   const hint = feasible ? '' : '; no productive route runs every one-way step forwards: a step may be missing (a termination, say), or pin the intermediates with %intermediates or %terminal';
   const message = `${reversing.length === 1 ? 'a route runs' : 'routes run'} a one-way step backwards, so ${reversing.length === 1 ? 'it cannot' : 'they cannot'} occur as written: ${listedRoutes}${hint}`;
-  context.diagnostics.push(finding('route-reverses-one-way-step', context.steps[0], message));
+  // Placed at the first step run backwards, where the author would look for the missing step.
+  const at = context.steps.find((step) => step.id === reversing[0].route.reversesOneWay[0]) ?? context.steps[0];
+  context.diagnostics.push(finding('route-reverses-one-way-step', at, message));
 }
 
 /** The route roles are read from: the overall route when productive, else the first productive route that runs no one-way step backwards, else the first productive one. */

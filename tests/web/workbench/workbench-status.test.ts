@@ -25,6 +25,15 @@ describe('workbench status line', () => {
     expect(status.problem).toMatch(/\d+ errors?/);
   });
 
+  it('does not count a route that runs a one-way step backwards, and says there is one', () => {
+    const analysis = structuredClone(asAnalysis(saltLake));
+    analysis.routes = [{ ...analysis.routes[0], reversesOneWay: ['B1'] }];
+    analysis.overall = null;
+    const status = workbenchStatus(analysis);
+    expect(status.text).toMatch(/· 0 productive routes \(\+ 1 that runs a one-way step backwards\) ·/);
+    expect(status.problem).toContain('no productive route');
+  });
+
   it('counts a productive overall route that is itself in the basis once', () => {
     const analysis = structuredClone(asAnalysis(saltLake));
     analysis.routes = [analysis.routes[0]];

@@ -19,12 +19,15 @@ export function workbenchStatus(analysis: MechanismAnalysis): WorkbenchStatus {
   const unbalanced = analysis.steps.filter((step) => !step.balanced).length;
   // The overall route is added after the basis when it is a combination of basis routes: it is
   // not a route of its own, so it is not counted (it is counted when the basis has it, or it is direct).
-  const productive = analysis.routes.filter((route) => route.kind === 'productive' && (route.basis || route.direct)).length;
+  // A route that runs a one-way step backwards cannot occur as written: it is named, not counted.
+  const counted = analysis.routes.filter((route) => route.kind === 'productive' && (route.basis || route.direct));
+  const productive = counted.filter((route) => !route.reversesOneWay?.length).length;
+  const backwards = counted.length - productive;
   const catalysts = analysis.species.filter((species) => species.role === 'catalyst').length;
   const parts = [
     plural(analysis.steps.length, 'step'),
     unbalanced === 0 ? 'balanced' : `${unbalanced} unbalanced`,
-    plural(productive, 'productive route'),
+    plural(productive, 'productive route') + (backwards > 0 ? ` (+ ${backwards} that ${backwards === 1 ? 'runs' : 'run'} a one-way step backwards)` : ''),
     plural(catalysts, 'catalyst'),
   ];
   const level: StatusLevel = errors > 0 || unbalanced > 0 ? 'error' : warnings > 0 || productive === 0 ? 'warning' : 'ok';

@@ -80,8 +80,7 @@ function routesOrNote(steps: StepModel[], stepJson: StepJson[], species: Registe
   if (steps.length <= MAX_ROUTE_ANALYSIS_STEPS) {
     const used = stepsForRoutes(steps, diagnostics);
     if (used.length === 0) return noRouteSteps(species, steps);
-    const json = used.map((step) => stepJson[step.index]);
-    const context = { steps: used, stoichiometry: buildStoichiometry(used), stepDH: json.map((step) => step.dH), stepBalanced: json.map((step) => step.balanced), lookup, diagnostics };
+    const context = { steps: used, stoichiometry: buildStoichiometry(used), stepDH: used.map((step) => stepJson[step.index].dH), lookup, diagnostics };
     return analyseRoutes(context, species, settings, maxRouteSteps);
   }
   const intermediates = formedAndConsumedKeys(species, settings.terminal);

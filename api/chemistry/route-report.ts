@@ -21,14 +21,12 @@ export interface RouteAnalysis {
 }
 
 const NOTHING: ReadonlySet<string> = new Set();
-const NO_ENTHALPY = { dH: null, fromSteps: null, fromNet: null };
 
 interface RouteContext {
   steps: readonly StepModel[];
   stoichiometry: Stoichiometry;
+  /** ΔH of each step; the steps are all balanced (route-steps.ts leaves the others out). */
   stepDH: readonly (number | null)[];
-  /** Whether each step conserves its atoms, charge and sites: a route through one that does not has no ΔH. */
-  stepBalanced: readonly boolean[];
   lookup: EnthalpyLookup;
   diagnostics: Diagnostic[];
 }
@@ -49,8 +47,7 @@ function routeJson(sigma: bigint[], flags: { direct: boolean; basis: boolean }, 
   const everything = netOfRoute(stoichiometry, sigma, NOTHING);
   const net = new Map([...everything].filter(([key]) => !stoichiometry.aside.has(key)));
   const aside = new Map([...everything].filter(([key]) => stoichiometry.aside.has(key)));
-  const throughUnbalanced = sigma.some((value, index) => value !== 0n && !context.stepBalanced[index]);
-  const enthalpy = throughUnbalanced ? NO_ENTHALPY : routeEnthalpy(sigma, context.stepDH, net, context.lookup);
+  const enthalpy = routeEnthalpy(sigma, context.stepDH, net, context.lookup);
   const multipliers: Record<string, number> = {};
   sigma.forEach((value, index) => value !== 0n && (multipliers[steps[index].id] = Number(value)));
   const kind = net.size > 0 ? 'productive' : 'null-cycle';

@@ -44,6 +44,8 @@ function readUnits(assignments: Assignment[], settings: MechanismSettings, diagn
 
 function readCondition(assignment: Assignment, diagnostics: Diagnostic[]): number | null {
   const key = assignment.key.text;
+  // M is in the mechanism's concentration unit, which may be written after it (checked once
+  // every %units line is read: see checkThirdBodyUnit).
   const units = key === 'T' ? '(K)?' : key === 'P' ? `(${Object.keys(PRESSURE_TO_ATM).join('|')})?` : '(.*)';
   const match = new RegExp(`^${NUMBER}\\s*${units}$`).exec(assignment.value.text);
   const value = match ? Number(match[1]) : NaN;
@@ -54,7 +56,8 @@ function readCondition(assignment: Assignment, diagnostics: Diagnostic[]): numbe
   return key === 'P' ? value * PRESSURE_TO_ATM[match[2] ?? 'atm'] : value;
 }
 
-function readConditions(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): void {
+function readConditions(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): Assignment | null {
+  let thirdBody: Assignment | null = null;
   for (const assignment of assignments) {
     const key = assignment.key.text;
     if (key !== 'T' && key !== 'P' && key !== 'M') {
@@ -62,7 +65,21 @@ function readConditions(assignments: Assignment[], settings: MechanismSettings, 
       continue;
     }
     settings.conditions[key] = readCondition(assignment, diagnostics);
+    if (key === 'M') thirdBody = assignment;
   }
+  return thirdBody;
+}
+
+/**
+ * A unit written after M must be the mechanism's concentration unit: M = 2.46e19 molecule cm^-3
+ * in a mechanism in mol L^-1 would otherwise be read as 2.46e19 mol L^-1 (it is not converted:
+ * the author writes M in the mechanism's unit).
+ */
+function checkThirdBodyUnit(assignment: Assignment, settings: MechanismSettings, diagnostics: Diagnostic[]): void {
+  const unit = new RegExp(`^${NUMBER}\\s*(.*)$`).exec(assignment.value.text)?.[2].replace(/\s+/g, ' ').trim() ?? '';
+  if (unit === '' || unit === settings.units.conc || settings.conditions.M === null) return;
+  badValue(diagnostics, assignment, `M is in the mechanism's concentration unit, ${settings.units.conc}; "${unit}" is not it (write M in ${settings.units.conc}, or change %units)`);
+  settings.conditions.M = null;
 }
 
 function named(items: ParticleNode[]): NamedParticle[] {
@@ -79,12 +96,14 @@ export function readDirectives(directives: readonly DirectiveNode[], diagnostics
     intermediates: null,
     declarations: readDeclarations(directives, diagnostics),
   };
+  let thirdBody: Assignment | null = null;
   for (const directive of directives) {
     if (directive.kind === 'title') settings.title = directive.text;
     else if (directive.kind === 'units') readUnits(directive.assignments, settings, diagnostics);
-    else if (directive.kind === 'conditions') readConditions(directive.assignments, settings, diagnostics);
+    else if (directive.kind === 'conditions') thirdBody = readConditions(directive.assignments, settings, diagnostics) ?? thirdBody;
     else if (directive.kind === 'terminal') settings.terminal = named(directive.items);
     else if (directive.kind === 'intermediates') settings.intermediates = named(directive.items);
   }
+  if (thirdBody) checkThirdBodyUnit(thirdBody, settings, diagnostics);
   return settings;
 }

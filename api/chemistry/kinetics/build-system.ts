@@ -47,6 +47,12 @@ function rateConstant(context: StepContext, direction: Direction): number | null
     report(context, 'rate-not-finite', `${direction} rate "${text}" does not give a finite number at the conditions`, at);
     return null;
   }
+  // A negative rate constant has no meaning in mass action (it would run the step backwards
+  // without its reverse's stoichiometry); integrating it only exhausts the step budget.
+  if (value < 0) {
+    report(context, 'rate-negative', `${direction} rate "${text}" is negative at the conditions (${value.toExponential(2)}); a rate constant is zero or positive`, at);
+    return null;
+  }
   const order = sideOrder(direction === 'forward' ? step.reactants : step.products) + (multipliesByM ? 1 : 0);
   const photolysis = step.photolysis && direction === 'forward';
   for (const warning of checkRateMagnitude({ order, unit: context.model.unit, value, photolysis })) {

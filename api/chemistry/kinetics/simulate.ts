@@ -30,7 +30,10 @@ function emptyResult(input: SimulationInput, diagnostics: KineticsDiagnostic[]):
 }
 
 function heldForSteadyState(input: SimulationInput, fixed: Uint8Array): Uint8Array {
-  if (!input.intermediates) return fixed;
+  // No intermediates named (or none at all, as when no species is both formed and consumed):
+  // the whole system is solved for, which for a closed one is its equilibrium. Holding every
+  // species instead would report the end of the run as a steady state without solving anything.
+  if (!input.intermediates || input.intermediates.length === 0) return fixed;
   const solved = new Set(input.intermediates);
   return fixed.map((isFixed, i) => (isFixed || !solved.has(input.model.species[i]) ? 1 : 0));
 }

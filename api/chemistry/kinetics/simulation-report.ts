@@ -26,6 +26,16 @@ function familyOf(input: SimulationInput, catalyst: { species: string; family?: 
   return catalystFamily(index(catalyst.species), candidates, composition);
 }
 
+/** A route whose steps add up to nothing (every species' net change zero): it carries no chain. */
+function isNullCycle(system: RateSystem, sigma: readonly number[]): boolean {
+  const net = new Map<number, number>();
+  system.steps.forEach((step, s) => {
+    if (!sigma[s]) return;
+    step.netIndex.forEach((species, k) => net.set(species, (net.get(species) ?? 0) + sigma[s] * step.netCoef[k]));
+  });
+  return [...net.values()].every((value) => Math.abs(value) < 1e-9);
+}
+
 function routeReports(input: SimulationInput, outcome: RunOutcome, kept: number[], fitted: number[][]): RouteReport[] {
   const initiation = initiationSteps(input.model);
   return kept.map((routeIndex, r) => {
@@ -35,7 +45,8 @@ function routeReports(input: SimulationInput, outcome: RunOutcome, kept: number[
       const family = familyOf(input, catalyst);
       return { catalyst: catalyst.species, family: family.map((i) => input.model.species[i]), values: turnoverFrequencies(rates, outcome.states, family) };
     });
-    return { name: route.name, rates, chainLength: chainLengths(rates, outcome.stepRates, initiation), turnover };
+    const chainLength = isNullCycle(outcome.system, outcome.sigma[routeIndex]) ? rates.map(() => null) : chainLengths(rates, outcome.stepRates, initiation);
+    return { name: route.name, rates, chainLength, turnover };
   });
 }
 

@@ -44,12 +44,11 @@ function boundWarnings(order: number, unit: ConcentrationUnit, value: number): s
 
 /**
  * Warnings (never errors) for a rate constant that cannot be right for its order and unit system:
- * negative values, and values above the physical bounds above. Non-integer orders (lumped steps)
- * and surface units are only checked for sign.
+ * values above the physical bounds above. Non-integer orders (lumped steps) and surface units are
+ * not checked. (A negative value is an error, reported where the rate is built.)
  */
 export function checkRateMagnitude(input: RateMagnitudeInput): string[] {
   const { order, unit, value, photolysis } = input;
-  if (value < 0) return [`the rate constant is negative (${value.toExponential(2)})`];
   if (photolysis) return photolysisWarnings(value);
   if (!Number.isInteger(order)) return [];
   return boundWarnings(order, unit, value);

@@ -55,6 +55,10 @@ describe('kinetics from a mechanism analysis', () => {
     const hbr = run.routes.find((route) => /Br2 \+ H2 → 2 HBr/.test(route.name));
     // Chain length = k2[Br•][H2] (net of HB4) / (k1[Br2][M]): of the order of 100 here.
     expect(hbr!.chainLength[0]).toBeGreaterThan(50);
+    // The null cycles (HB1 + HB5, HB2 + HB4) carry no chain: they have no chain length.
+    const nullCycles = run.routes.filter((route) => /null cycle/.test(route.name));
+    expect(nullCycles.length).toBeGreaterThan(0);
+    for (const route of nullCycles) expect(route.chainLength).toEqual([null]);
   });
 
   it('marks opaque names as of unknown composition (the enzyme example)', () => {

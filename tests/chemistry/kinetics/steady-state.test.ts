@@ -53,3 +53,20 @@ describe('the steady state by damped Newton', () => {
     expect(steady.residual).toBe(1);
   });
 });
+
+describe('the steady state of a simulation with no intermediates', () => {
+  it('solves the whole system (A ⇌ B reaches [B]/[A] = kf/kr = 6), not the end of a short run', async () => {
+    const { simulate } = await import('@api/chemistry/kinetics/simulate');
+    // The run stops long before equilibrium (kf + kr = 0.35 s⁻¹, tEnd = 0.1 s); an empty list of
+    // intermediates, as a mechanism with none gives, must not hold every species.
+    const run = simulate({
+      model: modelOf(['I: HONO <=> HNO2 @ 0.3 | 0.05']), conditions: { T: 298, P: 1 }, initial: { HONO: 1e12 },
+      tEnd: 0.1, output: { kind: 'linear', points: 5 }, intermediates: [], steadyState: true,
+    });
+    const steady = run.steadyState!;
+    expect(steady.converged).toBe(true);
+    expect(steady.solvedFor).toEqual(['HONO', 'HNO2']);
+    expect(steady.concentrations.HNO2 / steady.concentrations.HONO).toBeCloseTo(6, 8);
+    expect(steady.concentrations.HNO2 + steady.concentrations.HONO).toBeCloseTo(1e12, -2);
+  });
+});

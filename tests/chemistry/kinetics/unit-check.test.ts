@@ -19,8 +19,15 @@ describe('rate magnitudes checked against molecularity', () => {
     expect(checkRateMagnitude({ order: 2, unit: 'mol L^-1', value: 7e11, photolysis: false })).toHaveLength(1);
   });
 
-  it('warns about a negative rate constant, and J above any solar photolysis frequency', () => {
-    expect(checkRateMagnitude({ order: 1, unit: 'molecule cm^-3', value: -1, photolysis: false })[0]).toMatch(/negative/);
+  it('refuses a negative rate constant at its step (an error, so nothing is integrated), and warns about J above any solar photolysis frequency', () => {
+    const negative = buildRateSystem(modelOf(['N1: NO3 -> NO + O2 @ -0.1']), { T: 298, P: 1 });
+    expect(negative.system).toBeNull();
+    expect(negative.diagnostics.map((d) => [d.severity, d.code, d.label])).toEqual([['error', 'rate-negative', 'N1']]);
+    expect(negative.diagnostics[0].message).toContain('is negative at the conditions (-1.00e-1)');
+    // Negative only at some temperatures: refused where it is negative.
+    const crossing = buildRateSystem(modelOf(['N2: NO3 -> NO + O2 @ 1e-3 * (T - 250)']), { T: 298, P: 1 });
+    expect(crossing.diagnostics).toEqual([]);
+    expect(buildRateSystem(modelOf(['N2: NO3 -> NO + O2 @ 1e-3 * (T - 250)']), { T: 200, P: 1 }).system).toBeNull();
     expect(checkRateMagnitude({ order: 1, unit: 'molecule cm^-3', value: 5, photolysis: true })[0]).toMatch(/solar/);
     expect(checkRateMagnitude({ order: 1, unit: 'molecule cm^-3', value: 8e-3, photolysis: true })).toEqual([]);
   });

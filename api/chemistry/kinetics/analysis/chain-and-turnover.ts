@@ -2,7 +2,8 @@ import type { Composition } from './element-drift';
 
 /**
  * Chain length at each time: the route rate divided by the initiation rate (the summed net rates
- * of the initiation steps). Null where there is no initiation.
+ * of the initiation steps, per initiation event as in Houston's treatment; a definition per
+ * radical formed would halve it for I → 2 R). Null where there is no initiation.
  */
 export function chainLengths(routeRate: number[], stepRates: number[][], initiationSteps: number[]): (number | null)[] {
   return routeRate.map((rate, k) => {

@@ -42,7 +42,14 @@ function rateConstant(context: StepContext, direction: Direction): number | null
     report(context, 'third-body-unknown', 'this step needs [M]: give M in %conditions (surface units have no ideal-gas [M])', at);
     return null;
   }
-  const value = compiled.evaluate(scope);
+  let value: unknown;
+  try {
+    value = compiled.evaluate(scope);
+  } catch (error) {
+    // A function refusing its arguments (falloff with Fc > 1, say) says why, at the expression.
+    report(context, 'rate-expression', `${direction} rate: ${error instanceof Error ? error.message : String(error)}`, at);
+    return null;
+  }
   if (typeof value !== 'number' || !Number.isFinite(value)) {
     report(context, 'rate-not-finite', `${direction} rate "${text}" does not give a finite number at the conditions`, at);
     return null;

@@ -45,6 +45,18 @@ describe('rate constants evaluated from published parameters', () => {
     expect(k[0] / 1.05989e-11).toBeCloseTo(1, 5);
   });
 
+  it('refuses fall-off arguments out of range at the step, where the form would silently give 0 or too much', () => {
+    const refused = (args: string) => {
+      const { system, diagnostics } = buildRateSystem(modelOf([`C3: OH + NO2 + M -> HNO3 + M @ falloff(${args})`]), { T: 298, P: 1 });
+      expect(system).toBeNull();
+      return diagnostics.map((d) => [d.code, d.message]);
+    };
+    expect(refused('1.8e-30, 0, 0.6')).toEqual([['rate-expression', 'forward rate: falloff: k∞ must be positive, not 0']]);
+    expect(refused('1.8e-30, 2.8e-11, 0')[0][1]).toContain('Fc must be above 0 and at most 1, not 0');
+    expect(refused('1.8e-30, 2.8e-11, 1.5')[0][1]).toContain('not 1.5');
+    expect(refused('-1.8e-30, 2.8e-11, 0.6')[0][1]).toContain('k0 must be zero or positive');
+  });
+
   it('takes a photolysis value as J in s⁻¹ and a reversible step as forward | reverse', () => {
     const { system } = buildRateSystem(modelOf(['P1: NO2 + hv -> NO + O @ 8e-3', 'E1: N2O5 <=> NO2 + NO3 @ 0.05 | 2e-12']), { T: 298, P: 1 });
     expect(system!.steps.map((step) => [step.kForward, step.kReverse, step.photolysis])).toEqual([[8e-3, 0, true], [0.05, 2e-12, false]]);

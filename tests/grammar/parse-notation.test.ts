@@ -187,6 +187,24 @@ describe('parseMechanism: rejected notation', () => {
     expect(error).toMatchObject({ code: 'line-too-long', line: 1 });
   });
 
+  it('reads a step whose trailing comment makes the line long', () => {
+    const parsed = parseMechanism(`R1: O3 + hν -> O2 + O(1D) # ${'x'.repeat(3_000)}`);
+    expect(parsed.diagnostics).toEqual([]);
+    expect(parsed.steps).toHaveLength(1);
+  });
+
+  it('reads every line of a lumped mechanism whose lines nearly all have their own shape', () => {
+    const forms = ['C2H5O2', '0.25 C2H5O2', 'C2H5O2•', 'C2H5O2(aq)', '(CH3)2CHO2•', 'Fe^3+', 'CO*', 'O(1D)•'];
+    // Each line's terms spell its index in base 8, so no two lines share a token-type sequence.
+    const lines = Array.from({ length: 12_000 }, (_, index) => {
+      const terms = index.toString(8).padStart(5, '0').split('').map((digit) => forms[Number(digit)]);
+      return `L${index}: ${terms[0]} + ${terms[1]} -> ${terms.slice(2).join(' + ')} @ 1e-12`;
+    });
+    const parsed = parseMechanism(lines.join('\n'));
+    expect(parsed.diagnostics).toEqual([]);
+    expect(parsed.steps).toHaveLength(12_000);
+  });
+
   it('bounds the work on one line: too many tokens, or brackets nested too deep', () => {
     expect(parseMechanism(`${'O•'.repeat(400)} -> O2`).diagnostics[0]).toMatchObject({ code: 'line-too-long', line: 1 });
     expect(parseMechanism(`${'('.repeat(9)}CH3${')'.repeat(9)} -> CH3`).diagnostics[0]).toMatchObject({ code: 'syntax-error', column: 9 });

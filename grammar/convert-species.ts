@@ -80,6 +80,18 @@ function markError(context: LineContext, token: Token, message: string): void {
   context.diagnostics.push(diagnostic('error', PARSER_CODES.syntaxError, position, message, { found: token.text }));
 }
 
+/** Most surface sites one adsorbed species may occupy. */
+export const MAX_SITES = 100;
+
+/** The count after `*`: a whole number of sites from 1 (`CO*0` or `O*0.5` is reported, read as 1). */
+function siteCount(token: Token, context: LineContext): number {
+  const count = Number(token.text);
+  if (/^[1-9][0-9]*$/.test(token.text) && count <= MAX_SITES) return count;
+  const message = `the site count after * must be a whole number from 1 to ${MAX_SITES}, not ${token.text}`;
+  context.diagnostics.push(diagnostic('error', 'bad-count', { line: context.line, column: token.col }, message, { found: token.text }));
+  return 1;
+}
+
 /** Reads the marks; a second charge or a second adsorbed mark is a syntax error. */
 function readMarks(marks: RawMark[], context: LineContext) {
   let radicalMarks = 0;
@@ -93,7 +105,7 @@ function readMarks(marks: RawMark[], context: LineContext) {
       charge = sourceToken(mark.token, context);
     } else {
       if (sites > 0) markError(context, token, 'the adsorbed mark is written twice; write *2 for two sites');
-      sites = mark.count ? Number(tokenOf(mark.count, context).text) : 1;
+      sites = mark.count ? siteCount(tokenOf(mark.count, context), context) : 1;
     }
   }
   return { radicalMarks, charge, sites };

@@ -23,11 +23,21 @@ export function looksLikeFormula(word: string): boolean {
   return SYMBOL_RUN.test(word);
 }
 
-/** A count as written: empty means 1; zero or a leading zero is not a count. */
+/**
+ * The largest count after a symbol or group: far above any real formula (a protein has a few
+ * thousand carbons), and low enough that no atom total, even through nested groups, loses
+ * exactness in a double (see MAX_ATOMS).
+ */
+export const MAX_FORMULA_COUNT = 100_000;
+/** The most atoms of one element a formula may total (nested group counts multiply). */
+const MAX_ATOMS = 1_000_000_000;
+
+/** A count as written: empty means 1; zero, a leading zero or a count above the limit is not a count. */
 function readCount(text: string): number | null {
   if (text === '') return 1;
   if (!/^[1-9][0-9]*$/.test(text)) return null;
-  return Number(text);
+  const count = Number(text);
+  return count <= MAX_FORMULA_COUNT ? count : null;
 }
 
 function add(into: Map<string, number>, symbol: string, count: number): void {
@@ -51,7 +61,7 @@ function countWord(word: string, offset: number, into: Map<string, number>, prob
       const message = `${symbol === word ? symbol : `${symbol} in ${word}`} is not an element symbol (symbols are case-sensitive${hint ? `; ${hint}` : ''}); a named species must be declared: "%species ${word} = FORMULA"`;
       problems.push({ code: 'unknown-element', offset: at, found: symbol, message });
     } else if (count === null) {
-      problems.push({ code: 'bad-count', offset: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 (no leading zero)` });
+      problems.push({ code: 'bad-count', offset: at + symbol.length, found: countText, message: `count ${countText} after ${symbol} must be a whole number from 1 to ${MAX_FORMULA_COUNT} (no leading zero)` });
     } else add(into, symbol, count);
   }
 }
@@ -60,6 +70,11 @@ function countWord(word: string, offset: number, into: Map<string, number>, prob
 export function countElements(parts: readonly FormulaPart[]): FormulaCounts {
   const problems: FormulaProblem[] = [];
   const elements = countInto(parts, problems);
+  for (const [symbol, count] of elements) {
+    if (count <= MAX_ATOMS) continue;
+    const message = `the formula counts ${count.toExponential(2)} atoms of ${symbol}; the most a formula may hold is ${MAX_ATOMS.toExponential(0)}`;
+    problems.push({ code: 'bad-count', offset: 0, found: symbol, message });
+  }
   return { elements, problems };
 }
 
@@ -73,7 +88,7 @@ function countInto(parts: readonly FormulaPart[], problems: FormulaProblem[]): M
     const inner = countInto(part.parts, problems);
     const multiplier = part.count ? readCount(part.count.text) : 1;
     if (multiplier === null) {
-      const message = `a group count must be a whole number from 1, not ${part.count?.text}`;
+      const message = `a group count must be a whole number from 1 to ${MAX_FORMULA_COUNT}, not ${part.count?.text}`;
       problems.push({ code: 'bad-count', offset: part.count?.offset ?? part.offset, found: part.count?.text ?? '', message });
       continue;
     }

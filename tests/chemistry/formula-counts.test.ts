@@ -35,3 +35,25 @@ describe('element counts', () => {
     expect((new MF(text).getInfo() as { atoms: Record<string, number> }).atoms).toEqual(atoms);
   });
 });
+
+describe('counts out of range', () => {
+  const errorsOf = (text: string) => analyseMechanism(text).diagnostics.filter((item) => item.severity === 'error');
+
+  it('refuses a count too large to stay exact, at the count', () => {
+    const [error] = errorsOf('C9007199254740993 + hν -> C9007199254740993');
+    expect(error).toMatchObject({ code: 'bad-count', line: 1, column: 2, found: '9007199254740993' });
+    expect(errorsOf('C100000H2 + hν -> C100000H2')).toEqual([]);
+  });
+
+  it('refuses nested group counts that multiply beyond what a formula may hold', () => {
+    const [error] = errorsOf('((((C1000)1000)1000)1000) + hν -> C');
+    expect(error).toMatchObject({ code: 'bad-count', column: 1, found: 'C' });
+    expect(error.message).toContain('atoms of C');
+  });
+
+  it('refuses a site count of zero or a fraction of a site, and keeps whole ones', () => {
+    expect(errorsOf('CO*0 -> CO + *')[0]).toMatchObject({ code: 'bad-count', column: 4, found: '0' });
+    expect(errorsOf('O*0.5 -> O + *')[0]).toMatchObject({ code: 'bad-count', column: 3, found: '0.5' });
+    expect(errorsOf('CO*2 -> CO + 2 *')).toEqual([]);
+  });
+});

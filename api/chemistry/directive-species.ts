@@ -33,11 +33,23 @@ function reportOneSided(places: ReadonlyMap<string, NamedParticle>, registry: Sp
   }
 }
 
+/** %intermediates decides the routes, so a species it shares with %terminal is a contradiction to resolve. */
+function reportBothWays(intermediates: ReadonlyMap<string, NamedParticle>, terminal: ReadonlyMap<string, NamedParticle>, diagnostics: Diagnostic[]): void {
+  for (const [key, place] of intermediates) {
+    const there = terminal.get(key);
+    if (!there) continue;
+    const message = `%intermediates names ${key}, which %terminal on line ${there.line} names too; a species is either cancelled in every route or kept in the net reactions (it is treated as an intermediate)`;
+    diagnostics.push(finding('bad-directive', place, message, { found: key }));
+  }
+}
+
 /** Keys named by %terminal and %intermediates; names no step uses are reported and left out. */
 export function resolveDirectiveSpecies(settings: MechanismSettings, registry: SpeciesRegistry, diagnostics: Diagnostic[]) {
-  const terminal = new Set(settings.terminal ? placesOf(settings.terminal, settings, registry, '%terminal', diagnostics).keys() : []);
+  const terminalPlaces = settings.terminal ? placesOf(settings.terminal, settings, registry, '%terminal', diagnostics) : new Map<string, NamedParticle>();
+  const terminal = new Set(terminalPlaces.keys());
   if (!settings.intermediates) return { terminal, intermediates: null };
   const places = placesOf(settings.intermediates, settings, registry, '%intermediates', diagnostics);
   reportOneSided(places, registry, diagnostics);
+  reportBothWays(places, terminalPlaces, diagnostics);
   return { terminal, intermediates: [...places.keys()] };
 }

@@ -27,18 +27,36 @@ const TIME_UNITS = ['s'];
 const PRESSURE_TO_ATM: Record<string, number> = { atm: 1, bar: 100_000 / 101_325, Pa: 1 / 101_325, kPa: 1_000 / 101_325, hPa: 100 / 101_325, Torr: 1 / 760, mbar: 100 / 101_325 };
 const NUMBER = '([-+]?(?:[0-9]+\\.?[0-9]*|\\.[0-9]+)(?:[eE][-+]?[0-9]+)?)';
 
+/** Where each setting was first given and how, so that a repeat that changes it is named. */
+type SetPlaces = Map<string, { line: number; text: string }>;
+
+function noteRepeat(places: SetPlaces, what: string, position: { line: number; column: number }, text: string, diagnostics: Diagnostic[]): void {
+  const first = places.get(what);
+  if (!first) {
+    places.set(what, { line: position.line, text });
+    return;
+  }
+  if (first.text === text) return;
+  const message = `${what} is set again (line ${first.line} set it to ${first.text}); the later value, ${text}, is used`;
+  diagnostics.push(finding('directive-repeated', position, message, { found: text }));
+  places.set(what, { line: position.line, text });
+}
+
 function badValue(diagnostics: Diagnostic[], assignment: Assignment, message: string): void {
   diagnostics.push(finding('bad-directive', assignment.value, message, { found: assignment.value.text }));
 }
 
-function readUnits(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): void {
+function readUnits(assignments: Assignment[], settings: MechanismSettings, places: SetPlaces, diagnostics: Diagnostic[]): void {
   for (const assignment of assignments) {
     const value = assignment.value.text.replace(/\s+/g, ' ');
     const key = assignment.key.text;
     const allowed = key === 'conc' ? CONCENTRATION_UNITS : key === 'time' ? TIME_UNITS : null;
     if (!allowed) diagnostics.push(finding('bad-directive', assignment.key, `%units knows conc and time, not ${key}`, { found: key, expected: ['conc', 'time'] }));
     else if (!allowed.includes(value)) badValue(diagnostics, assignment, `${key} must be one of: ${allowed.join(', ')}`);
-    else settings.units[key as 'conc' | 'time'] = value;
+    else {
+      noteRepeat(places, `%units ${key}`, assignment.value, value, diagnostics);
+      settings.units[key as 'conc' | 'time'] = value;
+    }
   }
 }
 
@@ -56,7 +74,8 @@ function readCondition(assignment: Assignment, diagnostics: Diagnostic[]): numbe
   return key === 'P' ? value * PRESSURE_TO_ATM[match[2] ?? 'atm'] : value;
 }
 
-function readConditions(assignments: Assignment[], settings: MechanismSettings, diagnostics: Diagnostic[]): Assignment | null {
+/** A value that cannot be read is reported and leaves an earlier valid one in place. */
+function readConditions(assignments: Assignment[], settings: MechanismSettings, places: SetPlaces, diagnostics: Diagnostic[]): Assignment | null {
   let thirdBody: Assignment | null = null;
   for (const assignment of assignments) {
     const key = assignment.key.text;
@@ -64,7 +83,10 @@ function readConditions(assignments: Assignment[], settings: MechanismSettings, 
       diagnostics.push(finding('bad-directive', assignment.key, `%conditions knows T, P and M, not ${key}`, { found: key, expected: ['T', 'P', 'M'] }));
       continue;
     }
-    settings.conditions[key] = readCondition(assignment, diagnostics);
+    const value = readCondition(assignment, diagnostics);
+    if (value === null) continue;
+    noteRepeat(places, `%conditions ${key}`, assignment.value, assignment.value.text.replace(/\s+/g, ' ').trim(), diagnostics);
+    settings.conditions[key] = value;
     if (key === 'M') thirdBody = assignment;
   }
   return thirdBody;
@@ -86,7 +108,11 @@ function named(items: ParticleNode[]): NamedParticle[] {
   return items.map((node) => ({ node, line: node.line, column: node.column }));
 }
 
-/** Reads the directives in order; a later %title, %terminal or %intermediates replaces an earlier one. */
+/**
+ * Reads the directives in order. A later %title, unit or condition replaces an earlier one (a
+ * warning names the change); several %terminal or %intermediates lines add up, so that a long
+ * list can be split over lines.
+ */
 export function readDirectives(directives: readonly DirectiveNode[], diagnostics: Diagnostic[]): MechanismSettings {
   const settings: MechanismSettings = {
     title: null,
@@ -97,12 +123,15 @@ export function readDirectives(directives: readonly DirectiveNode[], diagnostics
     declarations: readDeclarations(directives, diagnostics),
   };
   let thirdBody: Assignment | null = null;
+  const places: SetPlaces = new Map();
   for (const directive of directives) {
-    if (directive.kind === 'title') settings.title = directive.text;
-    else if (directive.kind === 'units') readUnits(directive.assignments, settings, diagnostics);
-    else if (directive.kind === 'conditions') thirdBody = readConditions(directive.assignments, settings, diagnostics) ?? thirdBody;
-    else if (directive.kind === 'terminal') settings.terminal = named(directive.items);
-    else if (directive.kind === 'intermediates') settings.intermediates = named(directive.items);
+    if (directive.kind === 'title') {
+      noteRepeat(places, '%title', directive, directive.text, diagnostics);
+      settings.title = directive.text;
+    } else if (directive.kind === 'units') readUnits(directive.assignments, settings, places, diagnostics);
+    else if (directive.kind === 'conditions') thirdBody = readConditions(directive.assignments, settings, places, diagnostics) ?? thirdBody;
+    else if (directive.kind === 'terminal') settings.terminal = [...(settings.terminal ?? []), ...named(directive.items)];
+    else if (directive.kind === 'intermediates') settings.intermediates = [...(settings.intermediates ?? []), ...named(directive.items)];
   }
   if (thirdBody) checkThirdBodyUnit(thirdBody, settings, diagnostics);
   return settings;

@@ -23,3 +23,36 @@ describe('%conditions M and its unit', () => {
     expect(badDirectives(['%conditions M = 2.46e19 foo'])[0].message).toContain('"foo" is not it');
   });
 });
+
+describe('directives written more than once', () => {
+  const codes = (lines: string[]) => read(lines).diagnostics.map((item) => item.code);
+
+  it('uses the later condition and says which value it replaced; a repeat of the same value is quiet', () => {
+    const analysis = read(['%conditions T = 298 K', '%conditions T = 250 K, P = 1 atm']);
+    expect(analysis.conditions.T).toBe(250);
+    const [repeated] = analysis.diagnostics.filter((item) => item.code === 'directive-repeated');
+    expect(repeated).toMatchObject({ severity: 'warning', line: 2, column: 17 });
+    expect(repeated.message).toContain('line 1 set it to 298 K');
+    expect(codes(['%conditions T = 298 K', '%conditions T = 298 K'])).not.toContain('directive-repeated');
+  });
+
+  it('keeps an earlier valid condition when a later one cannot be read', () => {
+    const analysis = read(['%conditions T = 298 K', '%conditions T = -5']);
+    expect(analysis.conditions.T).toBe(298);
+    expect(codes(['%conditions T = 298 K', '%conditions T = -5'])).toContain('bad-directive');
+  });
+
+  it('adds up %terminal lines, so a long list may be split', () => {
+    const text = ['%terminal O2', '%terminal O3', 'A: O3 + hν -> O2 + O(3P)', 'B: O(3P) + O3 -> 2 O2', 'C: O2 + hν -> 2 O(3P)', 'D: O(3P) + O2 + M -> O3 + M'].join('\n');
+    const analysis = analyseMechanism(text);
+    expect(analysis.terminalSpecies).toEqual(['O2', 'O3']);
+    expect(analysis.intermediatesExplanation).toContain('less the %terminal species O2, O3');
+  });
+
+  it('refuses a species named both terminal and intermediate, at its place in %intermediates', () => {
+    const text = ['%terminal O2, O3', '%intermediates O(3P), O3', 'A: O3 + hν -> O2 + O(3P)', 'B: O(3P) + O3 -> 2 O2'].join('\n');
+    const [conflict] = analyseMechanism(text).diagnostics.filter((item) => item.code === 'bad-directive');
+    expect(conflict).toMatchObject({ severity: 'error', line: 2, column: 23, found: 'O3' });
+    expect(conflict.message).toContain('%terminal on line 1');
+  });
+});

@@ -25,6 +25,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'input-too-large': { text: () => 'O3 -> O2 + O(3P)\n'.repeat(500_000), line: 1, column: 1 },
   'line-too-long': { text: () => `O3 -> O2 + O(3P) @ ${'1+'.repeat(1_500)}1`, line: 1 },
   'bad-directive': { text: '%conditions T = hot', line: 1, column: 17 },
+  'directive-repeated': { text: '%conditions T = 298 K\n%conditions T = 250 K', line: 2, column: 17 },
   'unknown-element': { text: 'O3 + Xx -> XxO + O2', line: 1, column: 6 },
   'bad-count': { text: 'C0H4 + O3 -> CO2 + H2O', line: 1, column: 2 },
   'undeclared-name': { text: 'Enz + O2 -> EnzO2', line: 1, column: 1 },

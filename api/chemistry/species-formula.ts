@@ -4,7 +4,7 @@ import { didYouMean } from './formula-spelling';
 
 /** A problem inside a species, placed by its 0-based offset in the species text. */
 export interface FormulaProblem {
-  code: 'unknown-element' | 'bad-count' | 'undeclared-name';
+  code: 'unknown-element' | 'bad-count' | 'undeclared-name' | 'bad-declaration';
   offset: number;
   found: string;
   message: string;

@@ -40,6 +40,8 @@ interface Composition {
   elements: Map<string, number> | null;
   charge: number;
   radicalMarks: number;
+  /** The radical marks the key shows (a declared name's own marks are not written in its key). */
+  keyMarks: number;
   stateTagged: boolean;
   declared: DeclaredSpecies | null;
 }
@@ -49,7 +51,7 @@ function describe(node: SpeciesNode, composition: Composition): SpeciesInfo {
   const electrons = elements ? electronCount(elements, charge) : null;
   const radical = electrons === null ? radicalMarks > 0 : electrons % 2 === 1 || (radicalMarks > 0 && stateTagged);
   return {
-    key: speciesKey(node.formulaText, node.states, node.radicalMarks, charge, node.sites),
+    key: speciesKey(node.formulaText, node.states, composition.keyMarks, charge, node.sites),
     kind: 'species',
     formula: declared && declared.species ? declared.species.formulaText : node.formulaText,
     name: declared ? declared.name : null,
@@ -66,15 +68,38 @@ function describe(node: SpeciesNode, composition: Composition): SpeciesInfo {
   };
 }
 
+/**
+ * Whether marks written on a declared name repeat what its declaration already says: none, as
+ * many as declared, or one on a name whose composition has an odd electron count. `RO2•` is then
+ * the species `RO2` (declared C2H5O2•), not a second one that the routes would keep apart.
+ */
+function sameRadical(written: number, declared: number, elements: Map<string, number> | null, charge: number): boolean {
+  if (written === 0 || written === declared) return true;
+  return elements !== null && declared === 0 && written === 1 && electronCount(elements, charge) % 2 === 1;
+}
+
+/** A charge written on a name declared with a composition must be the declared charge. */
+function chargeProblem(node: SpeciesNode, declared: DeclaredSpecies, written: number): FormulaProblem | null {
+  const source = declared.species;
+  if (!source || !node.charge) return null;
+  const own = readCharge(source.charge, source.column).value;
+  if (written === own) return null;
+  const message = `${declared.name} is declared on line ${declared.line} as ${source.text} (charge ${own < 0 ? `−${-own}` : own}); written here with ${node.charge.text}, it would be another species: write ${declared.name}, or declare a name for this ion`;
+  return { code: 'bad-declaration', offset: node.charge.column - node.column, found: node.charge.text, message };
+}
+
 function declaredComposition(node: SpeciesNode, declared: DeclaredSpecies, charge: number | null): Composition {
   const source = declared.species;
   const inner = source ? countElements(source.formula) : null;
   const innerCharge = source ? readCharge(source.charge, source.column).value : 0;
   const states = [...(source?.states ?? []), ...node.states];
+  const declaredMarks = source?.radicalMarks ?? 0;
+  const elements = inner ? inner.elements : null;
   return {
-    elements: inner ? inner.elements : null,
+    elements,
     charge: charge ?? innerCharge,
-    radicalMarks: Math.max(node.radicalMarks, source?.radicalMarks ?? 0),
+    radicalMarks: Math.max(node.radicalMarks, declaredMarks),
+    keyMarks: sameRadical(node.radicalMarks, declaredMarks, elements, innerCharge) ? 0 : node.radicalMarks,
     stateTagged: states.some((tag) => !PHASE_TAG.test(tag)),
     declared,
   };
@@ -87,13 +112,15 @@ export function resolveSpecies(node: SpeciesNode, declarations: ReadonlyMap<stri
   const onlyWord = node.formula.length === 1 && node.formula[0].kind === 'word' ? node.formula[0].text : null;
   const declared = onlyWord === null ? undefined : declarations.get(onlyWord);
   if (declared) {
+    const mismatch = problems.length === 0 ? chargeProblem(node, declared, charge.value) : null;
+    if (mismatch) problems.push(mismatch);
     const composition = declaredComposition(node, declared, node.charge ? charge.value : null);
     return { info: problems.length > 0 ? null : describe(node, composition), problems };
   }
   const counted = countElements(node.formula);
   problems.push(...counted.problems);
   const stateTagged = node.states.some((tag) => !PHASE_TAG.test(tag));
-  const composition = { elements: counted.elements, charge: charge.value, radicalMarks: node.radicalMarks, stateTagged, declared: null };
+  const composition = { elements: counted.elements, charge: charge.value, radicalMarks: node.radicalMarks, keyMarks: node.radicalMarks, stateTagged, declared: null };
   return { info: problems.length > 0 ? null : describe(node, composition), problems };
 }
 

@@ -50,6 +50,23 @@ describe('species model', () => {
     expect(analysis.species[0]).toMatchObject({ key: 'RO2', name: 'RO2', formula: 'C2H5O2', radical: true, declared: true });
   });
 
+  it('reads a declared radical written with or without its mark as one species', () => {
+    const text = '%species RO2 = C2H5O2•\n%species R = C2H5\nP1: RO2• + NO• -> RO2 + NO•\nP2: R• + O2 -> RO2';
+    const analysis = analyseMechanism(text);
+    expect(analysis.species.map((item) => item.key)).toEqual(['RO2', 'NO•', 'R', 'O2']);
+    expect(analysis.steps[0].equation).toBe('RO2 + NO• → RO2 + NO•');
+    // Two marks are more than the declaration says: another species (a diradical form).
+    expect(analyseMechanism(`${text}\nP3: RO2•• -> RO2`).species.map((item) => item.key)).toContain('RO2••');
+  });
+
+  it('refuses a declared ion written with another charge, at the charge', () => {
+    const analysis = analyseMechanism('%species Sup = O2^-\nS1: Sup^2- -> Sup + e^-\nS2: Sup^- + H^+ -> HO2•');
+    const [error] = analysis.diagnostics.filter((item) => item.severity === 'error');
+    expect(error).toMatchObject({ code: 'bad-declaration', line: 2, column: 8, found: '^2-' });
+    expect(error.message).toContain('declared on line 1 as O2^- (charge −1)');
+    expect(analysis.species.map((item) => item.key)).toEqual(['Sup^-', 'H^+', 'HO2•']);
+  });
+
   it('lists only the species of steps that could be read', () => {
     expect(analyseMechanism('O3 + Xy -> O2').species).toEqual([]);
   });

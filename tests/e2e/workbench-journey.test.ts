@@ -59,11 +59,15 @@ describe('the workbench journey of an author', () => {
     // Photolysis of Cl2 gives two chlorine atoms; written with one, the step loses a Cl.
     await typeInEditor('\nC3: Cl2 + hν -> Cl•   @ 0.0015');
     await errorMarks().first().waitFor({ timeout: 10_000 });
-    await errorMarks().first().hover();
     const fix = page.locator('.cm-diagnosticAction', { hasText: 'Use' }).first();
-    await fix.waitFor();
-    await screenshot(page, 'workbench-suggested-fix');
-    await fix.click();
+    // The hover tooltip closes when a later check result replaces the marks (slow under load):
+    // hover again until the action is clicked.
+    await expect.poll(async () => {
+      await errorMarks().first().hover();
+      await fix.waitFor({ timeout: 3_000 });
+      await screenshot(page, 'workbench-suggested-fix');
+      return fix.click({ timeout: 3_000 }).then(() => true, () => false);
+    }, { timeout: 30_000 }).toBe(true);
     await expect.poll(() => editor().textContent()).toContain('C3: Cl2 + hν → 2 Cl•');
     await expect.poll(() => errorMarks().count(), { timeout: 10_000 }).toBe(0);
   });

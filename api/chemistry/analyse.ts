@@ -113,7 +113,7 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
   reportRadicalMarks(species, diagnostics);
   reportTwoSpellings(species, lookup, diagnostics);
   pass.missingEnthalpies.report(diagnostics);
-  reportRates(steps, text, diagnostics);
+  reportRates(steps, text, settings, diagnostics);
   const declared = resolveDirectiveSpecies(settings, registry, diagnostics);
   const routes = steps.length > 0
     ? routesOrNote(steps, stepJson, species, declared, lookup, options.maxRouteSteps ?? DEFAULT_MAX_ROUTE_STEPS, diagnostics)

@@ -50,6 +50,8 @@ export const DIAGNOSTIC_CODES = {
   'route-reverses-one-way-step': { severity: 'warning', meaning: 'a route runs a one-way step backwards (σ < 0), so it cannot occur as written' },
   'enthalpy-missing': { severity: 'info', meaning: 'species without an enthalpy of formation' },
   'rate-expression': { severity: 'error', meaning: 'a rate expression that cannot be evaluated (syntax, or a name or function not allowed)' },
+  'rate-not-finite': { severity: 'error', meaning: 'a rate expression that is infinite or not a number at the mechanism\'s conditions' },
+  'rate-negative': { severity: 'error', meaning: 'a rate expression that is negative at the mechanism\'s conditions' },
   'rate-count': { severity: 'warning', meaning: 'a reversible step with one rate, or a one-way step with two' },
   'rates-unchecked': { severity: 'info', meaning: 'too many steps to compile every rate expression while checking' },
 } as const satisfies Record<string, CodeInfo>;

@@ -1,6 +1,8 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
-import { compileRateExpression } from './kinetics/expressions/compile-rate';
+import type { MechanismSettings } from './directives';
+import { compileRateExpression, type CompiledRate, type RateScope } from './kinetics/expressions/compile-rate';
+import { idealGasConcentration, type ConcentrationUnit } from './kinetics/units';
 import { ratePositions } from './rate-positions';
 import type { StepModel } from './step-model';
 
@@ -11,9 +13,46 @@ import type { StepModel } from './step-model';
  */
 export const MAX_RATE_CHECK_STEPS = 600;
 
-function checkExpression(step: StepModel, direction: 'forward' | 'reverse', text: string, at: { line: number; column: number }, diagnostics: Diagnostic[]): void {
+/** The mechanism's own conditions, with the simulator's defaults (298.15 K, 1 atm, ideal-gas [M]). */
+export function checkScope(settings: Pick<MechanismSettings, 'conditions' | 'units'>): RateScope {
+  const T = settings.conditions.T ?? 298.15;
+  const P = settings.conditions.P ?? 1;
+  const M = settings.conditions.M ?? idealGasConcentration(P, T, settings.units.conc as ConcentrationUnit) ?? Number.NaN;
+  return { T, P, M };
+}
+
+function describeScope(scope: RateScope): string {
+  return `T = ${scope.T} K, P = ${Number(scope.P.toPrecision(6))} atm`;
+}
+
+/**
+ * Evaluates a compiled rate at the mechanism's conditions: a rate that throws, is not a finite
+ * number or is negative would stop a simulation there, so the checker says so first. A rate that
+ * reads [M] where the unit has none (a surface) is left to the simulator, which asks for M.
+ */
+function checkValue(step: StepModel, direction: 'forward' | 'reverse', compiled: CompiledRate, scope: RateScope, at: { line: number; column: number }, diagnostics: Diagnostic[]): void {
+  if (compiled.containsThirdBody && !Number.isFinite(scope.M)) return;
+  const where = `the ${direction} rate of step ${step.id}`;
+  let value: unknown;
+  try {
+    value = compiled.evaluate(scope);
+  } catch (error) {
+    diagnostics.push(finding('rate-expression', at, `${where} cannot be evaluated at ${describeScope(scope)}: ${error instanceof Error ? error.message : String(error)}`, { found: compiled.text }));
+    return;
+  }
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    diagnostics.push(finding('rate-not-finite', at, `${where} is not a finite number at ${describeScope(scope)} (${String(value)})`, { found: compiled.text }));
+  } else if (value < 0) {
+    diagnostics.push(finding('rate-negative', at, `${where} is negative at ${describeScope(scope)} (${value.toExponential(2)}); a rate constant is zero or positive`, { found: compiled.text }));
+  }
+}
+
+function checkExpression(step: StepModel, direction: 'forward' | 'reverse', text: string, at: { line: number; column: number }, scope: RateScope, diagnostics: Diagnostic[]): void {
   const compiled = compileRateExpression(text);
-  if (compiled.ok) return;
+  if (compiled.ok) {
+    checkValue(step, direction, compiled, scope, at, diagnostics);
+    return;
+  }
   const position = { line: at.line, column: at.column + compiled.column - 1 };
   diagnostics.push(finding('rate-expression', position, `the ${direction} rate of step ${step.id} cannot be used: ${compiled.error}`, { found: text }));
 }
@@ -34,18 +73,20 @@ function checkRateCount(step: StepModel, diagnostics: Diagnostic[]): void {
 /**
  * Checks the rates written after `@`: that a one-way step gives one and a reversible step two,
  * and (up to MAX_RATE_CHECK_STEPS steps) that each expression is one the simulator can evaluate,
- * placed at the column where it goes wrong.
+ * placed at the column where it goes wrong, and gives a finite, non-negative value at the
+ * mechanism's conditions.
  */
-export function reportRates(steps: readonly StepModel[], text: string, diagnostics: Diagnostic[]): void {
+export function reportRates(steps: readonly StepModel[], text: string, settings: Pick<MechanismSettings, 'conditions' | 'units'>, diagnostics: Diagnostic[]): void {
   if (steps.length === 0) return; // also: a text that was not a string has no steps
   const compile = steps.length <= MAX_RATE_CHECK_STEPS;
   const lines = compile ? text.split(/\r\n|\n|\r/) : null;
+  const scope = checkScope(settings);
   for (const step of steps) {
     checkRateCount(step, diagnostics);
     if (!compile || !step.rate) continue;
     const { forwardAt, reverseAt } = ratePositions(step.rate, lines);
-    checkExpression(step, 'forward', step.rate.forward, forwardAt, diagnostics);
-    if (step.rate.reverse !== null) checkExpression(step, 'reverse', step.rate.reverse, reverseAt, diagnostics);
+    checkExpression(step, 'forward', step.rate.forward, forwardAt, scope, diagnostics);
+    if (step.rate.reverse !== null) checkExpression(step, 'reverse', step.rate.reverse, reverseAt, scope, diagnostics);
   }
   if (!compile && steps.some((step) => step.rate)) {
     const message = `rate expressions are checked here for up to ${MAX_RATE_CHECK_STEPS} steps (this mechanism has ${steps.length}); they are checked when the mechanism is simulated`;

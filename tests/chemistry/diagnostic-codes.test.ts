@@ -59,6 +59,8 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'enthalpy-missing': { text: 'CO + * -> CO*', line: 1, column: 1 },
   // `exp(` is never closed: mathjs finds the end of the expression at its 15th character.
   'rate-expression': { text: 'R1: CH4 + OH• -> CH3• + H2O @ 6.4e-15 * exp(', line: 1, column: 45 },
+  'rate-not-finite': { text: 'O(3P) + O3 -> 2 O2 @ 1/0', line: 1, column: 22 },
+  'rate-negative': { text: '%conditions T = 200 K\nO(3P) + O3 -> 2 O2 @ 8e-12 * (T - 250)', line: 2, column: 22 },
   'rate-count': { text: 'N2O4 <=> 2 NO2• @ 1.0e5', line: 1, column: 17 },
   'rates-unchecked': { text: () => generateMechanism(MAX_RATE_CHECK_STEPS + 1), line: 3, column: 1 },
 };

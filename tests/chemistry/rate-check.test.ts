@@ -41,6 +41,36 @@ describe('rates after @ are checked with the steps', () => {
     expect(empty.map((item) => item.code).sort()).toEqual(['rate-count', 'rate-expression']);
   });
 
+  it('evaluates each rate at the mechanism\'s conditions: infinite, not a number, negative or refused by falloff', () => {
+    const text = [
+      'A: O3 + hν -> O2 + O(3P) @ -1e-10',
+      'B: O(3P) + O3 -> 2 O2 @ 1/0',
+      'C: O(3P) + O2 + M -> O3 + M @ log(0)',
+      'D: O2 + hν -> 2 O(3P) @ 1e400',
+      'E: Cl• + NO2• + M -> ClNO2 + M @ falloff(1.8e-31, 1.0e-11, 2)',
+    ].join('\n');
+    const findings = rateFindings(text);
+    expect(findings.map((item) => [item.code, item.line, item.column])).toEqual([
+      ['rate-negative', 1, 28],
+      ['rate-not-finite', 2, 25],
+      ['rate-not-finite', 3, 31],
+      ['rate-not-finite', 4, 25],
+      ['rate-expression', 5, 34],
+    ]);
+    expect(findings[0].message).toContain('negative at T = 298.15 K, P = 1 atm');
+    expect(findings[4].message).toContain('Fc must be above 0 and at most 1');
+  });
+
+  it('uses %conditions when it evaluates: a rate negative only below 250 K is an error at 200 K', () => {
+    const step = 'O(3P) + O3 -> 2 O2 @ 8e-12 * (T - 250) / 100';
+    expect(rateFindings(`%conditions T = 300 K\n${step}`)).toEqual([]);
+    expect(rateFindings(`%conditions T = 200 K\n${step}`)).toMatchObject([{ code: 'rate-negative', severity: 'error', line: 2 }]);
+  });
+
+  it('leaves a rate that reads [M] on a surface, where [M] has no ideal-gas value, to the simulator', () => {
+    expect(rateFindings('%units conc = mol m^-2\nO* + CO* + M -> CO2 + 2 * + M @ 1e3 * M')).toEqual([]);
+  });
+
   it('warns when a reversible step gives one rate and a one-way step two', () => {
     const oneRate = rateFindings('N2O4 <=> 2 NO2• @ 1.0e5');
     expect(oneRate).toMatchObject([{ code: 'rate-count', severity: 'warning', line: 1 }]);

@@ -69,7 +69,8 @@ export interface RouteJson {
   /** Σ σ ΔH of the steps and ΔH of the net reaction: Hess's law says they agree when both are known. */
   dHFromSteps: number | null;
   dHFromNet: number | null;
-  direct: boolean;
+  /** Whether no smaller route's steps are a subset of this one's; null when direct routes were not listed (over ~40 steps). */
+  direct: boolean | null;
   basis: boolean;
   /** Ids of the one-way steps this route runs backwards (σ < 0): empty for a route that can occur as written. */
   reversesOneWay: string[];

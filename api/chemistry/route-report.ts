@@ -42,7 +42,7 @@ function numbers(map: ReadonlyMap<string, Fraction>): Record<string, number> {
   return Object.fromEntries([...map].map(([key, value]) => [key, value.toNumber()]));
 }
 
-function routeJson(sigma: bigint[], flags: { direct: boolean; basis: boolean }, context: RouteContext): RouteJson {
+function routeJson(sigma: bigint[], flags: { direct: boolean | null; basis: boolean }, context: RouteContext): RouteJson {
   const { stoichiometry, steps } = context;
   const everything = netOfRoute(stoichiometry, sigma, NOTHING);
   const net = new Map([...everything].filter(([key]) => !stoichiometry.aside.has(key)));

@@ -7,7 +7,8 @@ import { rowsFor, type Stoichiometry } from './stoichiometry';
 /** One route: stoichiometric numbers per step (exact integers). */
 export interface RouteVector {
   sigma: bigint[];
-  direct: boolean;
+  /** null when direct routes were not listed (too many steps), so no route is known to be direct or not. */
+  direct: boolean | null;
   basis: boolean;
 }
 
@@ -59,7 +60,7 @@ export function findRoutes(stoichiometry: Stoichiometry, intermediates: readonly
   };
   if (stepCount > maxDirectSteps) {
     const overall = coveringRoute(rawBasis, reversible);
-    return assemble(rawBasis.map((sigma) => ({ sigma, direct: false, basis: true })), overall, null);
+    return assemble(rawBasis.map((sigma) => ({ sigma, direct: null, basis: true })), overall, null);
   }
   const enumerated = directRoutes(rows, reversible);
   const direct = enumerated.routes.map((sigma) => orient(sigma, reversible)).sort(byPreference(productive));
@@ -75,6 +76,6 @@ function assemble(routes: RouteVector[], overall: bigint[] | null, directComplet
   if (!overall) return { routes, overall: null, directComplete };
   const index = routes.findIndex((route) => sameRoute(route.sigma, overall));
   if (index >= 0) return { routes, overall: index, directComplete };
-  routes.push({ sigma: overall, direct: false, basis: false });
+  routes.push({ sigma: overall, direct: directComplete === null ? null : false, basis: false });
   return { routes, overall: routes.length - 1, directComplete };
 }

@@ -15,5 +15,7 @@ describe('examples/generate-large.ts', () => {
     expect(analysis.species.length).toBeGreaterThanOrEqual(200);
     expect(analysis.routes.length).toBeGreaterThan(0);
     expect(analysis.diagnostics.map((item) => item.code)).toContain('direct-routes-skipped');
+    // Direct routes were not listed, so no route is said to be direct or not.
+    expect(new Set(analysis.routes.map((route) => route.direct))).toEqual(new Set([null]));
   });
 });

@@ -11,10 +11,20 @@ function markedKey(item: RegisteredSpecies): string {
   return `${item.key.slice(0, item.key.length - chargeAndSites.length)}•${chargeAndSites}`;
 }
 
+/** A state tag that would name the state: a term symbol for an atom (3P), its own for a molecule. */
+function tagHint(item: RegisteredSpecies): string {
+  const symbols = Object.entries(item.elements);
+  const atom = symbols.length === 1 && symbols[0][1] === 1;
+  const tagged = (tag: string) => speciesKey(item.name ?? item.formula, [tag], item.radicalMarks, item.charge, item.sites);
+  if (atom) return `e.g. ${tagged('(3P)')}`;
+  return `with its term symbol, as in O2(a1Δg) or ${tagged('(3B1)')}`;
+}
+
 /**
  * Radical bookkeeping per species, reported once at its first appearance: an odd electron
  * count without a mark (often deliberate: NO, NO2, ClO), or a mark on an even-electron species
- * without a state tag to say which state is meant.
+ * without a state tag to say which state is meant, or an even number of marks on an odd-electron
+ * species (OH••: an odd count has 1, 3… unpaired electrons).
  */
 export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagnostics: Diagnostic[]): void {
   for (const item of species) {
@@ -25,8 +35,14 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
       const marked = markedKey(item);
       const message = `${item.key} has ${counted(item.electrons, 'electron')}; mark it as a radical (${marked}) or ignore`;
       diagnostics.push(finding('odd-electrons-unmarked', position, message, { found: item.key, expected: [marked] }));
+    } else if (odd && item.radicalMarks % 2 === 0) {
+      // The key holds its marks in one run (formula, tags, marks, charge, sites).
+      const marked = item.key.replace(/•+/, '•');
+      const message = `${item.key} shows ${item.radicalMarks} unpaired electrons, but ${counted(item.electrons, 'electron')} leave an odd number unpaired; write ${marked}`;
+      diagnostics.push(finding('radical-marks-parity', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {
-      const message = `${item.key} has ${item.electrons} electrons (even); to count it as a radical give the state a tag and keep the mark, e.g. ${item.formula}(3P)•, or drop the mark`;
+      const marks = item.radicalMarks === 1 ? 'mark' : 'marks';
+      const message = `${item.key} has ${item.electrons} electrons (even); to count it as a radical give the state a tag and keep the ${marks} (${tagHint(item)}), or drop the ${marks}`;
       diagnostics.push(finding('even-electrons-marked', position, message, { found: item.key }));
     }
   }

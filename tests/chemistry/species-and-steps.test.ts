@@ -40,6 +40,16 @@ describe('species model', () => {
     expect(species('O(3P)• + O2 + M -> O3 + M', 'O(3P)•')).toMatchObject({ radical: true });
   });
 
+  it('flags an even number of marks on an odd-electron species, and names a molecular state by its term symbol', () => {
+    const diagnostics = analyseMechanism('H2 + OH•• -> H2O + H•\nCH2•• + O2 -> HCO• + OH•').diagnostics;
+    // OH has 9 electrons (8 + 1), CH2 has 8 (6 + 2): periodic table.
+    const parity = diagnostics.find((item) => item.code === 'radical-marks-parity');
+    expect(parity).toMatchObject({ severity: 'warning', line: 1, column: 6, expected: ['OH•'] });
+    const even = diagnostics.find((item) => item.code === 'even-electrons-marked');
+    expect(even?.message).toContain('CH2(3B1)••');
+    expect(even?.message).not.toContain('CH2(3P)');
+  });
+
   it('does not make a phase tag reactive', () => {
     expect(species('Br2(g) + hν -> 2 Br•', 'Br2(g)')).toMatchObject({ reactive: false, radical: false });
   });

@@ -34,6 +34,8 @@ describe('routes are built only from steps without stoichiometry errors', () => 
     expect(message).toContain('A2 (line 2)');
     expect(message).toContain('A3 (line 3)');
     expect(message).toContain('A1 (line 4)');
+    expect(message).toContain('would not conserve light or third bodies, and would name two steps by one label');
+    expect(messages(slipped, 'steps-left-out-of-routes')[0]).toMatch(/would not conserve atoms$/);
     for (const route of analyseMechanism(text).routes) expect(route.aside).toEqual(expect.not.objectContaining({ 'hν': expect.any(Number) as number, 'M': expect.any(Number) as number }));
   });
 

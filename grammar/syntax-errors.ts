@@ -1,5 +1,6 @@
 import type { Parser } from 'nearley';
 import { diagnostic, PARSER_CODES, type Diagnostic } from './diagnostics';
+import { lookAlikeAt } from './look-alikes';
 
 /** nearley's parse table is not in its typings; this is the part read here. */
 interface ParseTable {
@@ -84,29 +85,6 @@ function bracketDiagnostic(line: number, index: number, found: string, expected:
   return diagnostic('error', PARSER_CODES.unbalancedBrackets, { line, column: index + 1 }, message, { found, expected: expectedList });
 }
 
-/**
- * Characters and marks that look like the notation's own but are not (typed from a word processor,
- * or copied from a paper), with what to write instead.
- */
-const LOOK_ALIKES: Record<string, string> = {
-  '·': '•',
-  '∙': '•',
-  '⋅': '•',
-  '⟶': '→',
-  '⇒': '→',
-  '=': '->', // (not on a directive line, where `=` assigns)
-  '↔': '⇌',
-  '⇄': '⇌',
-  '⁺': '^+',
-  '⁻': '^-',
-  '\u00a0': ' ', // a no-break space, as word processors put between a number and its unit
-  '\u2009': ' ',
-  '\u202f': ' ',
-  '¹': '1',
-  '²': '2',
-  '³': '3',
-};
-
 /** A character as a message shows it: quoted, or by its code point when it cannot be seen (U+00A0). */
 function visible(char: string): string {
   const code = char.codePointAt(0) ?? 0;
@@ -156,16 +134,17 @@ export function syntaxDiagnostic(
   if (scientific) {
     return diagnostic('error', PARSER_CODES.syntaxError, { line, column: scientific.column }, scientificCoefficientMessage(scientific.text), { found: scientific.text, expected });
   }
-  const found = token ? (token.type === 'invalid' ? token.text[0] : token.text) : 'end of line';
+  // An invalid token runs to the end of the line: the character is its first code point (whole, even outside the BMP).
+  const found = token ? (token.type === 'invalid' ? String.fromCodePoint(token.text.codePointAt(0) ?? 0) : token.text) : 'end of line';
   const shown = visible(found);
   const column = token ? token.col : lineText.trimEnd().length + 1;
   const noArrow = !token && !directiveLine(lineText) && !ANY_ARROW.test(lineText.split('@')[0]);
   const what = token?.type === 'invalid' ? `unexpected character ${shown}` : token ? `unexpected '${found}'` : noArrow ? 'the line ends too early: the step has no arrow between its reactants and products' : 'the line ends too early';
-  const lookAlike = token && !(directiveLine(lineText) && found === '=') ? LOOK_ALIKES[found] : undefined;
+  const lookAlike = token && !(directiveLine(lineText) && found === '=') ? lookAlikeAt(lineText.slice(token.col - 1)) : null;
   // Only where a name was wanted and the reserved word itself was not: `%species M = N2`, not `O + M M`.
   const nameWanted = expected.includes(TOKEN_NAMES.word) && !expected.includes(TOKEN_NAMES[token?.type ?? ''] ?? '');
   const reserved = token && !lookAlike && nameWanted ? RESERVED_WORDS[token.type ?? ''] : undefined;
-  const hint = lookAlike ? ` (write ${lookAlike === ' ' ? 'a plain space' : `'${lookAlike}'`} for ${shown})` : reserved ? ` (${found} is reserved: ${reserved})` : '';
+  const hint = lookAlike ? ` (write ${lookAlike.write === ' ' ? 'a plain space' : `'${lookAlike.write}'`} for ${lookAlike.found === found ? shown : `'${lookAlike.found}'`})` : reserved ? ` (${found} is reserved: ${reserved})` : '';
   const message = expected.length > 0 ? `${what}${hint}; expected ${expected.join(', ')}` : `${what}${hint}`;
   return diagnostic('error', PARSER_CODES.syntaxError, { line, column }, message, { found, expected });
 }

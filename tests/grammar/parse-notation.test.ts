@@ -156,6 +156,13 @@ describe('parseMechanism: rejected notation', () => {
     expect(message('Cl• + O3 = ClO• + O2')).toContain("(write '->' for '=')");
     expect(message('O3 + hν -> O2 + O(¹D)')).toContain("(write '1' for '¹')");
     expect(message('%conditions T == 298 K')).toBe("unexpected '='; expected a value");
+    // Runs are read whole: a superscript charge, subscript counts, a Unicode minus in a charge or an arrow.
+    expect(message('Fe³⁺ + e^- -> Fe²⁺')).toContain("(write '^3+' for '³⁺')");
+    expect(message('CO2 + H₂O -> H2CO3')).toContain("(write '2' for '₂')");
+    expect(message('O2^− + H^+ -> HO2•')).toContain("(write '^-' for '^−')");
+    expect(message('O3 + hν −> O2 + O(1D)')).toContain("(write '->' for '−>')");
+    // A character outside the Basic Multilingual Plane is shown whole (mathematical italic nu).
+    expect(message('O3 + h\u{1D708} -> O2 + O(1D)')).toContain("unexpected character '\u{1D708}' (write 'ν' for '\u{1D708}')");
     // Characters that cannot be seen are named by their code point.
     expect(message('O3\u00a0+ hν -> O2 + O(3P)')).toContain('unexpected character U+00A0 (write a plain space for U+00A0)');
     expect(message('O3 \u0001 -> O2 + O(3P)')).toContain('unexpected character U+0001;');

@@ -223,7 +223,8 @@ function offeredSmallSpecies(mechanismSpecies: readonly Candidate[], diff: Vecto
  * coefficient for one of its terms (or the term removed), the smallest change first; new whole
  * coefficients for all its species, when only one such set exists; one added species in a whole
  * amount (the mechanism's own species first, then common small ones; a free electron only where
- * the mechanism writes electrons); then the same changes in fractions. Null when no such change
+ * the mechanism writes electrons); then, for a step already written with fractions, the same changes
+ * in fractions. Null when no such change
  * balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
@@ -234,5 +235,10 @@ export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate
   const usable = [...mechanismSpecies, ...offeredSmallSpecies(mechanismSpecies, diff)].filter((c) => !c.opaque && !isAside(c));
   const single = smallestFirst(coefficientFixes(step, diff));
   const added = additionFixes(step, diff, usable);
-  return single.find(wholeNumbers) ?? rebalanced(step) ?? added.find(wholeNumbers) ?? single[0] ?? added[0] ?? null;
+  const whole = single.find(wholeNumbers) ?? rebalanced(step) ?? added.find(wholeNumbers);
+  if (whole) return whole;
+  // A fraction is a fix only for a step already written with fractions (a lumped step): in an
+  // elementary one (Cl• + O3 → ClO• + O3 given 4/3 O3) it hides the real slip.
+  const lumped = [...step.reactants, ...step.products].some((term) => !term.fraction.isInteger());
+  return lumped ? (single[0] ?? added[0] ?? null) : null;
 }

@@ -121,6 +121,12 @@ describe('step checks', () => {
     expect(fixes('C6H12O6 -> Xe')).toEqual([]);
   });
 
+  it('offers a fraction only for a step already written with fractions', () => {
+    expect(fixes('Cl• + O3 -> ClO• + O3')).toEqual([]);
+    // Oxygen: 2 + 3 × 2/3 = 1 + 2 × 1/2 + 2.
+    expect(fixes('CH3O2• + 1/2 O3 -> HCHO + 0.5 O2 + HO2•')).toEqual(['CH3O2• + 2/3 O3 → HCHO + 1/2 O2 + HO2•']);
+  });
+
   it('gives no ΔH or threshold for a step that does not conserve its atoms', () => {
     const [unbalanced] = analyseMechanism('Cl2 + hν -> Cl•').steps;
     expect(unbalanced).toMatchObject({ balanced: false, dH: null, thresholdNm: null });

@@ -224,8 +224,7 @@ function offeredSmallSpecies(mechanismSpecies: readonly Candidate[], diff: Vecto
  * coefficients for all its species, when only one such set exists; one added species in a whole
  * amount (the mechanism's own species first, then common small ones; a free electron only where
  * the mechanism writes electrons); then, for a step already written with fractions, the same changes
- * in fractions. Null when no such change
- * balances the step.
+ * in fractions. Null when no such change balances the step.
  */
 export function suggestFix(step: StepModel, mechanismSpecies: readonly Candidate[]): BalancingFix | null {
   const diff = difference(step);

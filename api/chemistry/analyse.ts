@@ -9,6 +9,7 @@ import { reportRadicalMarks } from './radical-marks';
 import { reportTwoSpellings } from './species-spellings';
 import { chainCarriers } from './chain-carriers';
 import { reportRates } from './rate-check';
+import { reportLateDeclarations } from './declarations';
 import { analyseRoutes, type RouteAnalysis } from './route-report';
 import { assignRoles } from './roles';
 import { SpeciesRegistry, type RegisteredSpecies } from './species-registry';
@@ -111,6 +112,7 @@ export function analyseMechanism(text: string, options: AnalyseOptions = {}): Me
   const { steps, json: stepJson } = pass;
   const species = registry.all();
   reportRadicalMarks(species, diagnostics);
+  reportLateDeclarations(species, settings.declarations, diagnostics);
   reportTwoSpellings(species, lookup, diagnostics);
   pass.missingEnthalpies.report(diagnostics);
   reportRates(steps, text, settings, diagnostics);

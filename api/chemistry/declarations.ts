@@ -2,6 +2,7 @@ import type { DirectiveNode } from '@grammar/ast';
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import { countElements, looksLikeFormula } from './species-formula';
+import type { RegisteredSpecies } from './species-registry';
 import type { DeclaredSpecies } from './species-resolve';
 
 type Declaration = Extract<DirectiveNode, { kind: 'declaration' }>;
@@ -43,4 +44,19 @@ export function readDeclarations(directives: readonly DirectiveNode[], diagnosti
     declarations.set(directive.name.text, { name: directive.name.text, line: directive.line, species: checkedFormula(directive, diagnostics) });
   }
   return declarations;
+}
+
+/**
+ * A declared name used on a line above its %species line: read as declared (a declaration holds
+ * for the whole text), but said once, at the first use, since the notation declares before use.
+ */
+export function reportLateDeclarations(species: readonly RegisteredSpecies[], declarations: ReadonlyMap<string, DeclaredSpecies>, diagnostics: Diagnostic[]): void {
+  const told = new Set<string>();
+  for (const item of species) {
+    const declared = item.name === null ? undefined : declarations.get(item.name);
+    if (!declared || told.has(declared.name) || item.firstLine >= declared.line) continue;
+    told.add(declared.name);
+    const message = `${declared.name} is used here before its declaration on line ${declared.line}; it is read as declared, but move the %species line above its first use`;
+    diagnostics.push(finding('declared-after-use', { line: item.firstLine, column: item.firstColumn }, message, { found: declared.name }));
+  }
 }

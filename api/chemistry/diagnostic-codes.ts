@@ -22,6 +22,7 @@ export const DIAGNOSTIC_CODES = {
   'bad-count': { severity: 'error', meaning: 'a count, coefficient or charge that is zero, padded or not a whole number' },
   'undeclared-name': { severity: 'error', meaning: 'a word that is neither a formula nor a declared name' },
   'bad-declaration': { severity: 'error', meaning: 'a %species declaration that repeats or shadows a name' },
+  'declared-after-use': { severity: 'warning', meaning: 'a declared name used above its %species line' },
   'opaque-species': { severity: 'info', meaning: 'a step with an opaque declared species is not element-balanced' },
   'unused-directive-species': { severity: 'warning', meaning: '%terminal or %intermediates names a species no step uses' },
   'intermediate-one-sided': { severity: 'warning', meaning: '%intermediates names a species that is only formed or only consumed' },

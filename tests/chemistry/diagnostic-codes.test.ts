@@ -30,6 +30,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'bad-count': { text: 'C0H4 + O3 -> CO2 + H2O', line: 1, column: 2 },
   'undeclared-name': { text: 'Enz + O2 -> EnzO2', line: 1, column: 1 },
   'bad-declaration': { text: '%species CO = CO', line: 1, column: 10 },
+  'declared-after-use': { text: 'P1: RO2 + NO• -> RO + NO2•\n%species RO2 = C2H5O2•\n%species RO = C2H5O•', line: 1, column: 5 },
   'opaque-species': { text: '%species Enz\nEnz + O2 -> Enz + O2', line: 2, column: 1 },
   'intermediate-one-sided': { text: '%intermediates O(1D), O3\nO3 + hν -> O2 + O(1D)\nO(1D) + H2O -> 2 OH•', line: 1, column: 23 },
   'unused-directive-species': { text: '%terminal N2\nO3 + hν -> O2 + O(3P)', line: 1, column: 11 },

@@ -55,7 +55,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'direct-routes-skipped': { text: () => generateMechanism(41), line: 3, column: 1 },
   'direct-routes-limit': { text: explodingMechanism, line: 15, column: 1 },
   'steps-left-out-of-routes': { text: 'X1: O3 + hν -> O2 + O(3P)\nX2: O(3P) + O2 -> O3 + O', line: 2, column: 1 },
-  'route-reverses-one-way-step': { text: 'R1: H2 + O2 -> HO2• + H•\nR2: H• + O2 -> OH• + O(3P)\nR3: O(3P) + H2 -> OH• + H•\nR4: OH• + H2 -> H2O + H•', line: 1, column: 1 },
+  'route-reverses-one-way-step': { text: '%intermediates H•, OH•, O(3P)\nR1: H2 + O2 -> HO2• + H•\nR2: H• + O2 -> OH• + O(3P)\nR3: O(3P) + H2 -> OH• + H•\nR4: OH• + H2 -> H2O + H•', line: 2, column: 1 },
   'species-two-spellings': { text: 'O3 + hν -> O2 + O(3P)\nO + O3 -> 2 O2', line: 2, column: 1 },
   'no-productive-route': { text: '%intermediates O3, O2, O(3P)\nO3 + hν -> O2 + O(3P)\nO(3P) + O2 + M -> O3 + M', line: 2, column: 1 },
   'enthalpy-missing': { text: 'CO + * -> CO*', line: 1, column: 1 },

@@ -1,4 +1,8 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { Fraction } from '@api/chemistry/fraction';
+import { rank } from '@api/chemistry/integer-matrix';
+import { essentialKeys } from '@api/chemistry/intermediates';
 import { analyseMechanism } from '@api/chemistry/analyse';
 import { exampleText } from '../helpers/examples';
 
@@ -40,6 +44,22 @@ describe('choice of intermediates', () => {
     expect(analysis.intermediatesExplanation).toContain('only the reactive species');
   });
 
+  it('releases one reactive species when the reactive ones leave no productive route either', () => {
+    // NO• + O3 → NO2• + O2 less NO• + O(3P) ⇌ NO2• is net O3 → O2 + O(3P), NO• the catalyst (common practice).
+    const analysis = analyseMechanism('Q1: NO• + O3 -> NO2• + O2\nQ2: NO• + O(3P) <=> NO2•');
+    expect(analysis.intermediates).toEqual(['NO•', 'NO2•']);
+    expect(analysis.intermediatesExplanation).toContain('O(3P) (first met on line 2) is released');
+    expect(analysis.routes).toMatchObject([{ multipliers: { Q1: 1, Q2: -1 }, net: 'O3 → O2 + O(3P)', kind: 'productive' }]);
+    expect(analysis.species.find((item) => item.key === 'NO•')?.role).toBe('catalyst');
+  });
+
+  it('makes a lone reversible step a route of its own', () => {
+    const analysis = analyseMechanism('W1: N2O5 <=> NO2• + NO3•');
+    expect(analysis.intermediates).toEqual([]);
+    expect(analysis.routes).toMatchObject([{ multipliers: { W1: 1 }, net: 'N2O5 → NO2• + NO3•' }]);
+    expect(analysis.intermediatesExplanation).toContain('every step is a route of its own');
+  });
+
   it('says so plainly when no species is both formed and consumed', () => {
     const analysis = analyseMechanism('P1: NO• + O3 -> NO2• + O2');
     expect(analysis.intermediates).toEqual([]);
@@ -65,5 +85,25 @@ describe('choice of intermediates', () => {
     // Br• (written Br.) is formed and consumed; O3 is only consumed.
     expect(oneSided).toEqual([expect.objectContaining({ severity: 'warning', line: 1, column: 21, found: 'O3' })]);
     expect(oneSided[0].message).toContain('which no step forms');
+  });
+});
+
+describe('releasing a species, decided by rank for larger mechanisms', () => {
+  // Random ±1/±2 stoichiometric matrices; the brute force removes each row and recomputes the rank.
+  const matrix = fc.array(fc.array(fc.integer({ min: -2, max: 2 }), { minLength: 7, maxLength: 7 }), { minLength: 1, maxLength: 8 });
+
+  it('finds exactly the rows whose removal lowers the rank, in one elimination', () => {
+    fc.assert(
+      fc.property(matrix, (values) => {
+        const keys = values.map((_, index) => `X${index}`);
+        const rows = new Map(values.map((row, index) => [keys[index], new Map(row.flatMap((value, step) => (value === 0 ? [] : [[step, Fraction.of(value)] as const])))]));
+        const stoichiometry = { stepCount: 7, reversible: Array<boolean>(7).fill(false), rows, columns: [], aside: new Set<string>() };
+        const sparse = (list: string[]) => list.map((key) => new Map([...(rows.get(key) ?? [])].map(([step, value]) => [step, value.num])));
+        const whole = rank(sparse(keys), 7);
+        const bruteForce = keys.filter((key) => (rows.get(key)?.size ?? 0) > 0 && rank(sparse(keys.filter((other) => other !== key)), 7) < whole);
+        expect([...essentialKeys(stoichiometry, keys)]).toEqual(bruteForce);
+      }),
+      { numRuns: 300, seed: 20261203 },
+    );
   });
 });

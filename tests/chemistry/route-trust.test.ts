@@ -50,14 +50,26 @@ describe('a route that runs a one-way step backwards', () => {
   // An open H2/O2 chain without termination (common practice: σ of a one-way step is never negative).
   const open = 'R1: H2 + O2 -> HO2• + H•\nR2: H• + O2 -> OH• + O(3P)\nR3: O(3P) + H2 -> OH• + H•\nR4: OH• + H2 -> H2O + H•';
 
+  // With H• pinned as an intermediate, every route that cancels it runs the initiation R1 backwards.
+  const pinned = `%intermediates H•, OH•, O(3P)\n${open}`;
+
   it('is flagged with the steps it reverses, in the JSON, the report and a warning', () => {
-    const analysis = analyseMechanism(open);
+    const analysis = analyseMechanism(pinned);
     const reversing = analysis.routes.filter((route) => route.reversesOneWay.length > 0);
     expect(reversing.length).toBeGreaterThan(0);
     expect(reversing[0].reversesOneWay).toContain('R1');
     expect(reversing[0].multipliers.R1).toBeLessThan(0);
     expect(formatReport(analysis, 'open.steps')).toContain('runs R1 backwards');
-    expect(messages(open, 'route-reverses-one-way-step')[0]).toContain('no productive route runs every one-way step forwards');
+    expect(messages(pinned, 'route-reverses-one-way-step')[0]).toContain('no productive route runs every one-way step forwards');
+  });
+
+  it('is avoided when not pinned: H• is released and the branching cycle shows the radicals it makes', () => {
+    const analysis = analyseMechanism(open);
+    expect(analysis.intermediates).toEqual(['OH•', 'O(3P)']);
+    expect(analysis.intermediatesExplanation).toContain('H• (first met on line 1) is released');
+    // R2 + R3 + 2 R4: H atoms 2 + 3·2 = 2 + 2·2 (common practice: chain branching multiplies H•).
+    expect(analysis.routes.map((route) => route.net)).toContain('3 H2 + O2 → 2 H• + 2 H2O');
+    for (const route of analysis.routes) expect(route.reversesOneWay).toEqual([]);
   });
 
   it('is never flagged when the one-way steps run forwards (Chapman, common practice)', () => {

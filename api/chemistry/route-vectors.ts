@@ -68,3 +68,25 @@ export function coveringRoute(candidates: readonly bigint[][], reversible: reado
 export function sameRoute(a: readonly bigint[], b: readonly bigint[]): boolean {
   return a.length === b.length && a.every((value, index) => value === b[index]);
 }
+
+/**
+ * σ made to run its one-way steps forwards by adding feasible routes through the steps it runs
+ * backwards (−F3 becomes +B3 by adding the null cycle F3 + B3), or null when some backward step
+ * has no such route. Adding a feasible route never lowers a one-way entry, so each round removes
+ * one backward step for good.
+ */
+export function runForwards(sigma: readonly bigint[], feasibleRoutes: readonly bigint[][], reversible: readonly boolean[]): bigint[] | null {
+  let current = sigma.slice();
+  for (;;) {
+    const step = current.findIndex((value, index) => !reversible[index] && value < 0n);
+    if (step < 0) return current.some((value) => value !== 0n) ? coprime(current) : null;
+    // The smallest route through the step: the fewest other steps drawn in.
+    let helper: readonly bigint[] | null = null;
+    for (const route of feasibleRoutes) {
+      if (route[step] > 0n && (!helper || supportOf(route).size < supportOf(helper).size)) helper = route;
+    }
+    if (!helper) return null;
+    const times = (-current[step] + helper[step] - 1n) / helper[step];
+    current = current.map((value, index) => value + times * (helper as readonly bigint[])[index]);
+  }
+}

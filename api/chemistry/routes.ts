@@ -1,7 +1,7 @@
 import { directRoutes } from './direct-routes';
 import { Fraction } from './fraction';
 import { nullSpace } from './integer-matrix';
-import { coveringRoute, independentSubset, orient, sameRoute } from './route-vectors';
+import { coveringRoute, feasible, independentSubset, orient, runForwards, sameRoute } from './route-vectors';
 import { rowsFor, type Stoichiometry } from './stoichiometry';
 
 /** One route: stoichiometric numbers per step (exact integers). */
@@ -38,6 +38,17 @@ export function netOfRoute(stoichiometry: Stoichiometry, sigma: readonly bigint[
   return net;
 }
 
+/**
+ * Basis vectors that run one-way steps forwards: the feasible ones, then the others repaired with
+ * feasible routes (analysis.md asks for one-way steps with σ ≥ 0 wherever a non-negative basis
+ * exists; the direct routes give one only when their listing is complete).
+ */
+function forwardsFirst(rawBasis: readonly bigint[][], direct: readonly bigint[][], reversible: readonly boolean[]): bigint[][] {
+  const usable = [...direct, ...rawBasis.filter((sigma) => feasible(sigma, reversible))];
+  const repaired = rawBasis.filter((sigma) => !feasible(sigma, reversible)).map((sigma) => runForwards(sigma, usable, reversible));
+  return [...rawBasis.filter((sigma) => feasible(sigma, reversible)), ...repaired.filter((sigma): sigma is bigint[] => sigma !== null)];
+}
+
 function byPreference(productive: (sigma: bigint[]) => boolean) {
   const size = (sigma: bigint[]) => sigma.filter((value) => value !== 0n).length;
   return (a: bigint[], b: bigint[]) => Number(productive(b)) - Number(productive(a)) || size(a) - size(b);
@@ -59,12 +70,13 @@ export function findRoutes(stoichiometry: Stoichiometry, intermediates: readonly
     return memo.get(sigma) as boolean;
   };
   if (stepCount > maxDirectSteps) {
-    const overall = coveringRoute(rawBasis, reversible);
-    return assemble(rawBasis.map((sigma) => ({ sigma, direct: null, basis: true })), overall, null);
+    const basis = independentSubset([...forwardsFirst(rawBasis, [], reversible), ...rawBasis], rawBasis.length, stepCount);
+    const overall = coveringRoute(basis, reversible);
+    return assemble(basis.map((sigma) => ({ sigma, direct: null, basis: true })), overall, null);
   }
   const enumerated = directRoutes(rows, reversible);
   const direct = enumerated.routes.map((sigma) => orient(sigma, reversible)).sort(byPreference(productive));
-  const basis = independentSubset([...direct, ...rawBasis], rawBasis.length, stepCount);
+  const basis = independentSubset([...direct, ...forwardsFirst(rawBasis, direct, reversible), ...rawBasis], rawBasis.length, stepCount);
   const isDirect = (sigma: bigint[]) => direct.some((route) => sameRoute(route, sigma));
   const listed: RouteVector[] = basis.map((sigma) => ({ sigma, direct: isDirect(sigma), basis: true }));
   for (const sigma of direct) if (!basis.some((chosen) => sameRoute(chosen, sigma))) listed.push({ sigma, direct: true, basis: false });

@@ -72,6 +72,29 @@ describe('a route that runs a one-way step backwards', () => {
     for (const route of analysis.routes) expect(route.reversesOneWay).toEqual([]);
   });
 
+  it('is avoided when every reaction is written as two one-way steps, with or without the direct routes listed', () => {
+    // Hydrogen–oxygen reactions (common practice), each written forwards (F) and backwards (B).
+    const reactions = [
+      'H• + O2 -> OH• + O(3P)', 'O(3P) + H2 -> OH• + H•', 'OH• + H2 -> H2O + H•', 'OH• + OH• -> H2O + O(3P)',
+      'H2 + M -> H• + H• + M', 'O2 + M -> O(3P) + O(3P) + M', 'OH• + M -> O(3P) + H• + M', 'H2O + M -> H• + OH• + M',
+      'H• + O2 + M -> HO2• + M', 'HO2• + H• -> H2 + O2', 'HO2• + H• -> OH• + OH•', 'HO2• + O(3P) -> O2 + OH•',
+      'HO2• + OH• -> H2O + O2', 'HO2• + HO2• -> H2O2 + O2', 'H2O2 + M -> OH• + OH• + M', 'H2O2 + H• -> H2O + OH•',
+      'H2O2 + H• -> HO2• + H2', 'H2O2 + O(3P) -> OH• + HO2•', 'H2O2 + OH• -> H2O + HO2•', 'HO2• + H• -> H2O + O(3P)',
+      'O(3P) + OH• + M -> HO2• + M',
+    ];
+    const pairs = (count: number) => reactions.slice(0, count).flatMap((reaction, index) => {
+      const [left, right] = reaction.split(' -> ');
+      return [`F${index + 1}: ${reaction}`, `B${index + 1}: ${right} -> ${left}`];
+    }).join('\n');
+    // 42 steps: routes from the exact basis alone; 20 steps: the direct routes are listed too.
+    for (const text of [pairs(21), pairs(10)]) {
+      const analysis = analyseMechanism(text);
+      expect(analysis.routes.length).toBeGreaterThan(0);
+      for (const route of analysis.routes) expect(route.reversesOneWay).toEqual([]);
+      expect(analysis.overall).not.toBeNull();
+    }
+  });
+
   it('is never flagged when the one-way steps run forwards (Chapman, common practice)', () => {
     const chapman = 'C1: O2 + hν -> 2 O(3P)\nC2: O(3P) + O2 + M -> O3 + M\nC3: O3 + hν -> O2 + O(3P)\nC4: O(3P) + O3 -> 2 O2';
     const analysis = analyseMechanism(chapman);

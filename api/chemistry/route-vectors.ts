@@ -77,16 +77,14 @@ export function sameRoute(a: readonly bigint[], b: readonly bigint[]): boolean {
  */
 export function runForwards(sigma: readonly bigint[], feasibleRoutes: readonly bigint[][], reversible: readonly boolean[]): bigint[] | null {
   let current = sigma.slice();
+  // Smallest first: the fewest other steps drawn in.
+  const helpers = feasibleRoutes.map((route) => ({ route, size: supportOf(route).size })).sort((a, b) => a.size - b.size).map(({ route }) => route);
   for (;;) {
     const step = current.findIndex((value, index) => !reversible[index] && value < 0n);
     if (step < 0) return current.some((value) => value !== 0n) ? coprime(current) : null;
-    // The smallest route through the step: the fewest other steps drawn in.
-    let helper: readonly bigint[] | null = null;
-    for (const route of feasibleRoutes) {
-      if (route[step] > 0n && (!helper || supportOf(route).size < supportOf(helper).size)) helper = route;
-    }
+    const helper = helpers.find((route) => route[step] > 0n);
     if (!helper) return null;
     const times = (-current[step] + helper[step] - 1n) / helper[step];
-    current = current.map((value, index) => value + times * (helper as readonly bigint[])[index]);
+    current = current.map((value, index) => value + times * helper[index]);
   }
 }

@@ -39,14 +39,18 @@ export function netOfRoute(stoichiometry: Stoichiometry, sigma: readonly bigint[
 }
 
 /**
- * Basis vectors that run one-way steps forwards: the feasible ones, then the others repaired with
- * feasible routes (analysis.md asks for one-way steps with σ ≥ 0 wherever a non-negative basis
- * exists; the direct routes give one only when their listing is complete).
+ * The raw basis reordered and repaired so that vectors which run one-way steps forwards come
+ * first: the feasible ones, then the others repaired with feasible routes, then the rest (analysis.md
+ * asks for σ ≥ 0 on one-way steps wherever a non-negative basis exists; the direct routes give one
+ * only when their listing is complete). Null when nothing could be repaired: the raw order stands.
  */
-function forwardsFirst(rawBasis: readonly bigint[][], direct: readonly bigint[][], reversible: readonly boolean[]): bigint[][] {
-  const usable = [...direct, ...rawBasis.filter((sigma) => feasible(sigma, reversible))];
-  const repaired = rawBasis.filter((sigma) => !feasible(sigma, reversible)).map((sigma) => runForwards(sigma, usable, reversible));
-  return [...rawBasis.filter((sigma) => feasible(sigma, reversible)), ...repaired.filter((sigma): sigma is bigint[] => sigma !== null)];
+function forwardsFirst(rawBasis: readonly bigint[][], direct: readonly bigint[][], reversible: readonly boolean[]): bigint[][] | null {
+  const forwards = rawBasis.filter((sigma) => feasible(sigma, reversible));
+  const backwards = rawBasis.filter((sigma) => !feasible(sigma, reversible));
+  if (backwards.length === 0) return null;
+  const usable = [...direct, ...forwards];
+  const repaired = backwards.map((sigma) => runForwards(sigma, usable, reversible)).filter((sigma): sigma is bigint[] => sigma !== null);
+  return repaired.length > 0 ? [...forwards, ...repaired, ...backwards] : null;
 }
 
 function byPreference(productive: (sigma: bigint[]) => boolean) {
@@ -70,13 +74,14 @@ export function findRoutes(stoichiometry: Stoichiometry, intermediates: readonly
     return memo.get(sigma) as boolean;
   };
   if (stepCount > maxDirectSteps) {
-    const basis = independentSubset([...forwardsFirst(rawBasis, [], reversible), ...rawBasis], rawBasis.length, stepCount);
+    const reordered = forwardsFirst(rawBasis, [], reversible);
+    const basis = reordered ? independentSubset(reordered, rawBasis.length, stepCount) : rawBasis;
     const overall = coveringRoute(basis, reversible);
     return assemble(basis.map((sigma) => ({ sigma, direct: null, basis: true })), overall, null);
   }
   const enumerated = directRoutes(rows, reversible);
   const direct = enumerated.routes.map((sigma) => orient(sigma, reversible)).sort(byPreference(productive));
-  const basis = independentSubset([...direct, ...forwardsFirst(rawBasis, direct, reversible), ...rawBasis], rawBasis.length, stepCount);
+  const basis = independentSubset([...direct, ...(forwardsFirst(rawBasis, direct, reversible) ?? rawBasis)], rawBasis.length, stepCount);
   const isDirect = (sigma: bigint[]) => direct.some((route) => sameRoute(route, sigma));
   const listed: RouteVector[] = basis.map((sigma) => ({ sigma, direct: isDirect(sigma), basis: true }));
   for (const sigma of direct) if (!basis.some((chosen) => sameRoute(chosen, sigma))) listed.push({ sigma, direct: true, basis: false });

@@ -11,9 +11,29 @@ interface Viewer {
 
 const ROUND_STATE = `(select r.state from review_rounds r where r.mechanism_id = m.id order by r.id desc limit 1)`;
 
+const LATEST = 'rv.mechanism_id = m.id and rv.number = m.latest_revision_number';
+/** Species keys use `•` for radical marks; `.` is its ASCII spelling (step-notation.md), the only dot a key has. */
+export const canonicalRadicalMarks = (key: string) => key.replace(/\./g, '•');
+
+/**
+ * Plain words find a mechanism by its title and summary (stemmed full text), or by a species or a step
+ * label its latest revision holds, so that the header's "mechanism, species or label" box finds `BrO•`,
+ * `Br.` or `B3` without the library's `species:` token.
+ */
+function matchesWords(query: Knex.QueryBuilder, q: string) {
+  return query
+    .whereRaw("m.search @@ websearch_to_tsquery('english', ?)", [q])
+    .orWhereExists((sub) =>
+      sub.from('revisions as rv').join('revision_species as rs', 'rs.revision_id', 'rv.id')
+        .whereRaw(LATEST).where('rs.species_key', canonicalRadicalMarks(q)))
+    .orWhereExists((sub) =>
+      sub.fromRaw("revisions as rv, jsonb_array_elements(rv.analysis->'steps') as step")
+        .whereRaw(LATEST).whereRaw("lower(step->>'label') = lower(?)", [q]));
+}
+
 function filtered(db: Db, viewer: Viewer, filters: ListMechanismsQuery) {
   const query = whereVisibleTo(db('mechanisms as m'), viewer);
-  if (filters.q) query.whereRaw("m.search @@ websearch_to_tsquery('english', ?)", [filters.q]);
+  if (filters.q) query.where((words) => matchesWords(words, filters.q!));
   if (filters.tag) query.whereRaw('? = any(m.tags)', [filters.tag]);
   if (filters.author) query.where('m.owner_id', filters.author);
   if (filters.visibility) query.where('m.visibility', filters.visibility);
@@ -23,8 +43,7 @@ function filtered(db: Db, viewer: Viewer, filters: ListMechanismsQuery) {
   if (filters.species) {
     query.whereExists((sub) =>
       sub.from('revisions as rv').join('revision_species as rs', 'rs.revision_id', 'rv.id')
-        .whereRaw('rv.mechanism_id = m.id and rv.number = m.latest_revision_number')
-        .where('rs.species_key', filters.species!));
+        .whereRaw(LATEST).where('rs.species_key', filters.species!));
   }
   return query;
 }

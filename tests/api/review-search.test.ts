@@ -52,6 +52,17 @@ describe('GET /api/mechanisms', () => {
     expect(await slugsOf(rosalind, '?species=CO*')).toEqual([]);
   });
 
+  it('finds by plain words a species or a step label of the latest revision, as the header box promises', async () => {
+    expect(await slugsOf(rosalind, `?q=${encodeURIComponent('BrO•')}`)).toEqual(['salt-lake-bromine-cycle']);
+    expect(await slugsOf(rosalind, '?q=Br.')).toEqual(['salt-lake-bromine-cycle']);
+    expect(await slugsOf(rosalind, `?q=${encodeURIComponent('IO^-')}`)).toEqual(['iodide-catalysed-peroxide-decomposition']);
+    expect(await slugsOf(rosalind, '?q=i2')).toEqual(['iodide-catalysed-peroxide-decomposition']);
+    // A private mechanism's species stays hidden from someone who cannot see it.
+    expect(await slugsOf(rosalind, '?q=CO*')).toEqual([]);
+    expect(await slugsOf(mei, '?q=CO*')).toEqual(['co-oxidation-on-a-platinum-group-surface']);
+    expect(await slugsOf(rosalind, '?q=Xq')).toEqual([]);
+  });
+
   it('filters by tag, author, visibility and round state', async () => {
     expect(await slugsOf(curator, '?tag=teaching')).toEqual(['iodide-catalysed-peroxide-decomposition']);
     expect((await slugsOf(curator, `?author=${t.ids.get(WHO.secondReviewer)}`)).sort()).toEqual(['co-oxidation-on-a-platinum-group-surface', 'iodide-catalysed-peroxide-decomposition']);

@@ -121,6 +121,12 @@ describe('chain carriers', () => {
     expect(formatReport(analysis, 'hbr.steps')).toContain('Chain carriers: Br•, H•');
   });
 
+  it('leave out a radical that a step only passes through (N2O5 decomposition, common practice)', () => {
+    // NO2• is on both sides of R2 in the same amount: that step neither consumes nor forms it.
+    const text = 'R1: N2O5 <=> NO2• + NO3•\nR2: NO3• + NO2• -> NO• + NO2• + O2\nR3: NO• + NO3• -> 2 NO2•';
+    expect(analyseMechanism(text).chainCarriers).toEqual(['NO•']);
+  });
+
   it('are Cl• and ClO• in catalytic ozone loss by chlorine (common practice)', () => {
     expect(analyseMechanism('Cl• + O3 -> ClO• + O2\nClO• + O(3P) -> Cl• + O2\nO3 + hν -> O2 + O(3P)').chainCarriers).toEqual(['Cl•', 'ClO•']);
   });

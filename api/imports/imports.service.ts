@@ -18,7 +18,7 @@ export async function previewImport(db: Knex, files: UploadedFile[]) {
     const analysis = analyseMechanism(candidate.source, { enthalpy });
     const errors = analysis.diagnostics.filter((d) => d.severity === 'error');
     return {
-      file: candidate.file, title: candidate.title, slug: candidate.slug,
+      file: candidate.file, title: candidate.title, slug: candidate.slug, refusal: candidate.refusal,
       steps: analysis.steps.length,
       routes: analysis.routes.map((route) => route.net),
       errors: errors.length,
@@ -35,6 +35,9 @@ const bigIntsAsNumbers = (_key: string, value: unknown) => (typeof value === 'bi
 
 /** The same rules as a mechanism written by hand (title and source size); 422 naming file and field. */
 function validInput(candidate: ImportCandidate, slug: string, visibility: 'public' | 'private') {
+  if (candidate.refusal) {
+    throw new AppError(422, 'IMPORT_INVALID', `${candidate.file}, mechanism "${candidate.title}": ${candidate.refusal}`, { file: candidate.file, field: 'source' });
+  }
   const input = { slug, title: candidate.title, visibility, source: candidate.source, changeNote: `imported from ${candidate.file}` };
   const parsed = CreateMechanismBody.safeParse(input);
   if (parsed.success) return parsed.data;

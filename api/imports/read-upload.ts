@@ -9,6 +9,8 @@ export interface ImportCandidate {
   source: string;
   /** The answer key the file carried (a JSON export with answers), to compare after analysis. */
   exportedAnswers: ExportDocument['mechanisms'][number]['answers'] | null;
+  /** Why this mechanism cannot be imported although its file could be read ("the file is empty"), or null. */
+  refusal: string | null;
 }
 
 export interface UploadedFile {
@@ -38,9 +40,19 @@ function readText(file: UploadedFile): string {
   return text.replace(/^\uFEFF/, '');
 }
 
+/** Comments, blank lines and directives hold no step; what is left after removing them does. */
+const NOT_A_STEP = /#.*$|^\s*%.*$/gm;
+
+/** Why a text holds nothing to import: nothing at all, or only blanks, comments and directives. */
+export function emptinessOf(text: string, what: string): string | null {
+  if (text.trim() === '') return `${what} is empty`;
+  if (text.replace(NOT_A_STEP, '').trim() === '') return `${what} has no steps (only blank lines, comments or directives)`;
+  return null;
+}
+
 function fromSteps(file: UploadedFile, text: string): ImportCandidate[] {
   const title = /^%title\s+(.+)$/m.exec(text)?.[1].trim() ?? file.originalname.replace(/\.steps$/i, '');
-  return [{ file: file.originalname, title, slug: slugOf(file.originalname), source: text, exportedAnswers: null }];
+  return [{ file: file.originalname, title, slug: slugOf(file.originalname), source: text, exportedAnswers: null, refusal: emptinessOf(text, 'the file') }];
 }
 
 function fromJson(file: UploadedFile, text: string): ImportCandidate[] {
@@ -58,6 +70,7 @@ function fromJson(file: UploadedFile, text: string): ImportCandidate[] {
   }
   return parsed.data.mechanisms.map((mechanism) => ({
     file: file.originalname, title: mechanism.title, slug: mechanism.slug, source: mechanism.source, exportedAnswers: mechanism.answers ?? null,
+    refusal: emptinessOf(mechanism.source, 'its source'),
   }));
 }
 

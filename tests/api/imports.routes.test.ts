@@ -35,6 +35,16 @@ describe('POST /api/imports/preview', () => {
     expect(await mechanismCount()).toBe(before);
   });
 
+  it('refuses an empty file, or one without a step, in its own row so the other files still preview', async () => {
+    const res = await upload(owner, '/api/imports/preview', [['empty.steps', ''], ['notes.steps', '# to be written\n\n'], ['good.steps', 'A1: O3 -> O2 + O(3P)\n']]);
+    expect(res.status).toBe(200);
+    expect(res.body.map((p: { file: string; refusal: string | null }) => [p.file, p.refusal])).toEqual([
+      ['empty.steps', 'the file is empty'],
+      ['notes.steps', 'the file has no steps (only blank lines, comments or directives)'],
+      ['good.steps', null],
+    ]);
+  });
+
   it('answers 403 to someone without the author role', async () => {
     expect((await upload(instructor, '/api/imports/preview', [['a.steps', 'A1: O3 -> O2 + O(3P)\n']])).status).toBe(403);
   });
@@ -80,6 +90,8 @@ describe('bad uploads', () => {
     ['JSON that does not parse', [['broken.json', '{"format": ']], 422, 'IMPORT_INVALID'],
     ['JSON of the wrong shape', [['other.json', JSON.stringify({ format: 'something-else', mechanisms: [] })]], 422, 'IMPORT_INVALID'],
     ['no file at all', [], 400, 'NO_FILES'],
+    ['an empty .steps file', [['empty.steps', '']], 422, 'IMPORT_INVALID'],
+    ['a .steps file of only blanks and comments', [['notes.steps', '\n  \n# to be written\n%title Later\n']], 422, 'IMPORT_INVALID'],
   ] as Array<[string, Upload[], number, string]>)('refuses %s with a clear error and imports nothing', async (_what, files, status, code) => {
     const before = await mechanismCount();
     const good: Upload = ['good.steps', 'A1: O3 -> O2 + O(3P)\n'];
@@ -87,6 +99,8 @@ describe('bad uploads', () => {
     expect(res.status).toBe(status);
     expect(res.body.error.code).toBe(code);
     if (files.length > 0 && status !== 413) expect(res.body.error.message).toContain(files[0][0]);
+    if (files[0]?.[0] === 'empty.steps') expect(res.body.error.message).toContain('the file is empty');
+    if (files[0]?.[0] === 'notes.steps') expect(res.body.error.message).toContain('has no steps');
     expect(await mechanismCount()).toBe(before);
   });
 

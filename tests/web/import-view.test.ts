@@ -12,7 +12,7 @@ vi.mock('@web/services/imports', () => ({ previewImport: vi.fn(), importFiles: v
 const bromine = new File(['B1: Br• + O3 -> BrO• + O2\n'], 'salt-lake-bromine.steps', { type: 'text/plain' });
 const preview: imports.ImportPreview = {
   file: 'salt-lake-bromine.steps', title: 'Salt-lake bromine cycle', slug: 'salt-lake-bromine', steps: 5,
-  routes: ['2 O3 → 3 O2'], errors: 0, diagnostics: [], matchesExport: null,
+  routes: ['2 O3 → 3 O2'], errors: 0, diagnostics: [], matchesExport: null, refusal: null,
 };
 
 async function chooseFiles(files: File[]) {
@@ -50,5 +50,20 @@ describe('ImportView', () => {
     const wrapper = await chooseFiles([new File([new Uint8Array([0x89, 0x50])], 'picture.steps')]);
     expect(wrapper.get('[role="alert"]').text()).toContain('picture.steps: not UTF-8 text');
     expect(wrapper.find('tbody').exists()).toBe(false);
+  });
+
+  it('refuses an empty file in its row and keeps the Import button off', async () => {
+    const empty = new File([''], 'empty.steps', { type: 'text/plain' });
+    vi.mocked(imports.previewImport).mockResolvedValue([
+      { ...preview, file: 'empty.steps', title: 'empty', slug: 'empty', steps: 0, routes: [], refusal: 'the file is empty' },
+      preview,
+    ]);
+    const wrapper = await chooseFiles([empty, bromine]);
+    expect(wrapper.get('tbody').text()).toContain('refused: the file is empty');
+    expect(wrapper.get('[role="alert"]').text()).toContain('empty.steps: the file is empty');
+    const importButton = wrapper.get('button.p-button:not(.p-togglebutton)');
+    expect(importButton.attributes('disabled')).toBeDefined();
+    await importButton.trigger('click');
+    expect(imports.importFiles).not.toHaveBeenCalled();
   });
 });

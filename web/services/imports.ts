@@ -12,6 +12,8 @@ export interface ImportPreview {
   diagnostics: Diagnostic[];
   /** For a JSON export with answers: whether the analysis here gives the same answers. */
   matchesExport: boolean | null;
+  /** Why this mechanism cannot be imported ("the file is empty"), or null. */
+  refusal: string | null;
 }
 
 export interface ImportedMechanism {

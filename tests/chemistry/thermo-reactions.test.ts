@@ -22,6 +22,11 @@ describe('reaction enthalpies by Hess’s law', () => {
     ['Br2(l) → Br2(g)', 30.91, 0.01, [[1, 'Br2(l)']], [[1, 'Br2(g)']], 'CODATA key values'],
     ['H2O(l) → H2O(g)', 44.004, 0.01, [[1, 'H2O(l)']], [[1, 'H2O']], 'CODATA key values, ΔvapH°(298 K)'],
     ['2 O3 → 3 O2', -285.3, 0.1, [[2, 'O3']], [[3, 'O2']], 'NIST-JANAF O3 entry (analysis.md example route)'],
+    ['C2H5 + O2 → C2H5O2', -145.6, 0.1, [[1, 'C2H5•'], [1, 'O2']], [[1, 'C2H5O2•']], 'Knyazev & Slagle, J. Phys. Chem. A 102 (1998) 1770'],
+    // Alkylperoxy + NO → alkoxy + NO2 is about 45 kJ/mol exothermic (from memory).
+    ['C2H5O2 + NO → C2H5O + NO2', -45, 8, [[1, 'C2H5O2•'], [1, 'NO']], [[1, 'C2H5O•'], [1, 'NO2']], 'from memory'],
+    // Formaldehyde written HCHO, as atmospheric mechanisms do: the same ΔfH° as CH2O (ATcT).
+    ['HCHO → CH2O', 0, 1e-9, [[1, 'HCHO']], [[1, 'CH2O']], 'ATcT ver. 1.124'],
   ] as [string, number, number, [number, string][], [number, string][], string][])(
     '%s: ΔH ≈ %f ± %f kJ/mol',
     (_equation, expected, tolerance, reactants, products) => {

@@ -12,6 +12,8 @@ export const CARBON_C1: readonly ThermoRecord[] = [
   { key: 'CH3O2', name: 'methylperoxy radical', dfH: 12, uncertainty: 3, source: roughly(ATCT), smiles: 'CO[O]' },
   { key: 'CH3O', name: 'methoxy radical', dfH: 21, uncertainty: 2, source: roughly(ATCT), smiles: 'C[O]' },
   { key: 'CH2O', name: 'formaldehyde', dfH: -109.229, uncertainty: 0.096, source: ATCT_1124, smiles: 'C=O' },
+  // The same molecule as written in most atmospheric mechanisms (species are identified as written).
+  { key: 'HCHO', name: 'formaldehyde', dfH: -109.229, uncertainty: 0.096, source: ATCT_1124, smiles: 'C=O' },
   { key: 'HCO', name: 'formyl radical', dfH: 41.8, uncertainty: 1, source: roughly(ATCT), smiles: '[CH]=O' },
   { key: 'CH3OH', name: 'methanol (gas)', dfH: -200.9, uncertainty: 1, source: roughly(ATCT), smiles: 'CO' },
   { key: 'HCOOH', name: 'formic acid (gas)', dfH: -378.6, uncertainty: 1, source: roughly(PEDLEY), smiles: 'OC=O' },

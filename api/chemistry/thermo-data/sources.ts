@@ -15,6 +15,8 @@ export const CCCBDB = 'NIST CCCBDB Release 22 (2022), experimental ΔfH(298.15 K
 // Ruscic et al., J. Phys. Chem. A 110 (2006) 6592, values printed in kcal/mol (× 4.184).
 export const ATCT_2006 = lookedUp('Active Thermochemical Tables, Ruscic et al., J. Phys. Chem. A 110 (2006) 6592');
 export const ATCT_1124 = lookedUp('Active Thermochemical Tables, ver. 1.124 (atct.anl.gov)');
+// −ΔH°298(R + O2 → RO2) = 139.9 + 5.7·N(C–C) kJ/mol, 145.6 for ethyl; combined with ΔfH°(C2H5) of this table.
+export const KNYAZEV_SLAGLE_C2H5O2 = lookedUp('Knyazev & Slagle, J. Phys. Chem. A 102 (1998) 1770, ΔH°298(C2H5 + O2 → C2H5O2) = −145.6 kJ/mol with ΔfH°(C2H5) = 119 kJ/mol (ATcT, from memory)');
 export const ELEMENT_REFERENCE = 'reference state of the element: 0 by definition';
 
 /** A source whose value was recalled only to a few kJ/mol: its uncertainty is widened to cover that. */

@@ -1,4 +1,5 @@
 import { solveSteadyState, type SteadyState } from './analysis/steady-state';
+import { massActionDerivative } from './mass-action';
 import { massActionProblem } from './mass-action-problem';
 import type { RateSystem } from './rate-system';
 import type { SteadyStateReport } from './simulation-types';
@@ -29,10 +30,29 @@ function relaxed(setup: SteadyStateSetup): Float64Array {
   return run.states.at(-1) ?? setup.start;
 }
 
+/** The species still moving fastest (relative to their size) at a point that is not steady, with the way they move. */
+function stillChanging(state: SteadyState, setup: SteadyStateSetup): string {
+  const rates = new Float64Array(setup.species.length);
+  massActionDerivative(setup.system, state.concentrations, setup.light, rates, setup.held);
+  const moving = setup.species
+    // Moving means changing by more than the tolerance over the relaxation time, as in the solver's own test.
+    .map((key, i) => ({ key, rate: rates[i], relative: (Math.abs(rates[i]) * setup.relaxTime) / (setup.atol + setup.rtol * Math.abs(state.concentrations[i])) }))
+    .filter((item, i) => !setup.held[i] && item.relative > 1)
+    .sort((a, b) => b.relative - a.relative)
+    .slice(0, 3);
+  if (moving.length === 0) return '';
+  return ` At the last estimate ${moving.map((item) => `${item.key} is still ${item.rate > 0 ? 'rising' : 'falling'}`).join(', ')}; the values shown are the last estimate, not a steady state.`;
+}
+
 function report(state: SteadyState, setup: SteadyStateSetup, method: SteadyStateReport['method']): SteadyStateReport {
   const concentrations = Object.fromEntries(setup.species.map((key, i) => [key, state.concentrations[i]]));
   const solvedFor = setup.species.filter((_, i) => !setup.held[i]);
-  return { ...state, concentrations, solvedFor, method };
+  const message = state.converged || state.message === null ? state.message : `${capitalised(state.message)}.${stillChanging(state, setup)}`;
+  return { ...state, message, concentrations, solvedFor, method };
+}
+
+function capitalised(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 /**

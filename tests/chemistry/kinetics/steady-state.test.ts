@@ -70,3 +70,18 @@ describe('the steady state of a simulation with no intermediates', () => {
     expect(steady.concentrations.HNO2 + steady.concentrations.HONO).toBeCloseTo(1e12, -2);
   });
 });
+
+describe('a steady state that does not exist', () => {
+  it('says which species keep moving and that the values are not a steady state (N2O5 held, its products pile up)', async () => {
+    const { simulate } = await import('@api/chemistry/kinetics/simulate');
+    const run = simulate({
+      model: modelOf(['F1: N2O5 -> NO2 + NO3 @ 1e-3']), conditions: { T: 298, P: 1 }, initial: { N2O5: 1e15 }, fixed: ['N2O5'],
+      tEnd: 10, output: { kind: 'linear', points: 5 }, steadyState: true,
+    });
+    const steady = run.steadyState!;
+    expect(steady.converged).toBe(false);
+    expect(steady.message).toMatch(/^The rate equations do not pin every species down here/);
+    expect(steady.message).toContain('NO2 is still rising');
+    expect(steady.message).toContain('the values shown are the last estimate, not a steady state');
+  });
+});

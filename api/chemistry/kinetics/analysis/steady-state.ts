@@ -122,7 +122,7 @@ export function solveSteadyState(system: RateSystem, options: SteadyStateOptions
   });
   for (let iteration = 1; iteration <= (options.maxIterations ?? 50); iteration++) {
     if (negligibleChange(system, c, options)) return finish(true, iteration - 1, null);
-    if (!newton.factorJacobian(c)) return finish(false, iteration, 'the Jacobian is singular at this point');
+    if (!newton.factorJacobian(c)) return finish(false, iteration, 'the rate equations do not pin every species down here (a singular Jacobian): a species may be formed with nothing to remove it, or a whole family of states may be steady');
     const step = newtonStep(newton, c);
     if (scaledSize(step, c, options) <= 1) {
       c = c.map((value, i) => Math.max(0, value + step[i]));

@@ -1,4 +1,4 @@
-import { ref } from 'vue';
+import { ref, watch } from 'vue';
 import { ApiError } from '@web/services/http';
 import { createMechanism, type MechanismSummary, type Visibility } from '@web/services/mechanisms';
 import { fieldErrorsOf } from '@web/services/validation';
@@ -11,6 +11,10 @@ export function useNewMechanism() {
   const titleError = ref<string | null>(null);
   const creating = ref(false);
   const error = ref<Error | null>(null);
+  // The message answers an empty title; once one is typed it no longer applies.
+  watch(title, (value) => {
+    if (value.trim()) titleError.value = null;
+  });
 
   async function create(source: string, changeNote: string): Promise<MechanismSummary | null> {
     titleError.value = title.value.trim() ? null : 'Give the mechanism a title';

@@ -1,6 +1,12 @@
 import { ref, shallowRef, type Ref } from 'vue';
 import { ApiError } from '@web/services/http';
 import { saveRevision, type RevisionConflict, type RevisionDetail } from '@web/services/mechanisms';
+
+/** Two texts side by side: the author's, based on an older revision, and the latest revision's. */
+export interface ComparedTexts {
+  latest: Pick<RevisionConflict['latest'], 'number' | 'source' | 'changeNote'>;
+  yours: Pick<RevisionConflict['yours'], 'base' | 'source'>;
+}
 import { clearDraft, writeDraft } from './useDraftStorage';
 
 function isConflict(error: unknown): error is ApiError & { details: RevisionConflict } {
@@ -17,7 +23,7 @@ function isConflict(error: unknown): error is ApiError & { details: RevisionConf
 export function useRevisionSave(slug: Ref<string | null>, base: Ref<number | null>, source: Ref<string>) {
   const saving = ref(false);
   const error = ref<Error | null>(null);
-  const conflict = shallowRef<RevisionConflict | null>(null);
+  const conflict = shallowRef<ComparedTexts | null>(null);
   /** The author's own text, kept beside the editor after taking the latest, to copy from. */
   const keptText = ref<string | null>(null);
 
@@ -59,5 +65,10 @@ export function useRevisionSave(slug: Ref<string | null>, base: Ref<number | nul
     keptText.value = null;
   }
 
-  return { saving, error, conflict, keptText, save, takeLatest, dismissKept };
+  /** A restored text based on an older revision, shown against the latest as a refused save would be. */
+  function compareWith(latest: RevisionDetail, yours: ComparedTexts['yours']): void {
+    conflict.value = { latest: { number: latest.number, source: latest.source, changeNote: latest.changeNote }, yours };
+  }
+
+  return { saving, error, conflict, keptText, save, takeLatest, dismissKept, compareWith };
 }

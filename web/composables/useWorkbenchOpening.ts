@@ -2,6 +2,7 @@ import { computed, ref } from 'vue';
 import type { RouteLocationNormalizedLoaded } from 'vue-router';
 import { isDemoExample, loadExampleText } from '@web/components/library/demoExamples';
 import { useDraftAutosave } from './useDraftAutosave';
+import type { ForeignDraft } from './useDraftStorage';
 import { useLiveAnalysis } from './useLiveAnalysis';
 import { useNewMechanism } from './useNewMechanism';
 import { useRevisionSave } from './useRevisionSave';
@@ -24,15 +25,17 @@ export function useWorkbenchOpening(route: RouteLocationNormalizedLoaded) {
   const source = ref('');
   const base = ref<number | null>(null);
   const note = ref('');
-  const restoredAt = ref<string | null>(null);
+  /** This tab's unsaved text put back into the editor on opening: when it was kept and what it started from. */
+  const restored = ref<{ savedAt: string; base: number | null } | null>(null);
   const savedSource = computed(() => workbench.revision.value?.source ?? '');
   const dirty = computed(() => source.value !== savedSource.value);
 
   const live = useLiveAnalysis(source);
   const selection = useStepSelection(live.analysis);
-  const drafts = useDraftAutosave(slug, source, base, savedSource);
-  const revisionSave = useRevisionSave(slug, base, source);
   const fresh = useNewMechanism();
+  const draftTitle = computed(() => (isNew.value ? fresh.title.value : ''));
+  const drafts = useDraftAutosave(slug, source, base, savedSource, draftTitle);
+  const revisionSave = useRevisionSave(slug, base, source);
 
   async function openNew(): Promise<void> {
     workbench.reset();
@@ -44,7 +47,8 @@ export function useWorkbenchOpening(route: RouteLocationNormalizedLoaded) {
       fresh.title.value = TITLE_DIRECTIVE.exec(source.value)?.[1].trim() ?? '';
     } else if (draft) {
       source.value = draft.source;
-      restoredAt.value = draft.savedAt;
+      fresh.title.value = draft.title ?? '';
+      restored.value = { savedAt: draft.savedAt, base: null };
     } else {
       source.value = '';
     }
@@ -59,12 +63,12 @@ export function useWorkbenchOpening(route: RouteLocationNormalizedLoaded) {
     const draft = drafts.restorable(revision.source, requestedRevision.value);
     base.value = draft?.base ?? revision.number;
     source.value = draft?.source ?? revision.source;
-    restoredAt.value = draft?.savedAt ?? null;
+    restored.value = draft ? { savedAt: draft.savedAt, base: draft.base } : null;
   }
 
   async function open(): Promise<void> {
     if (!WORKBENCH_ROUTES.includes(String(route.name))) return;
-    restoredAt.value = null;
+    restored.value = null;
     note.value = '';
     if (isNew.value) await openNew();
     else if (slug.value) await openExisting(slug.value);
@@ -72,9 +76,25 @@ export function useWorkbenchOpening(route: RouteLocationNormalizedLoaded) {
 
   function discardDraft(): void {
     drafts.discard();
-    restoredAt.value = null;
+    restored.value = null;
     base.value = workbench.revision.value?.number ?? null;
     source.value = savedSource.value;
+    if (isNew.value) fresh.title.value = '';
+  }
+
+  /** Another tab's draft, put into this editor on request (only when this one holds nothing unsaved). */
+  function takeForeignDraft(draft: ForeignDraft): void {
+    drafts.takeForeign(draft);
+    base.value = isNew.value ? null : (draft.base ?? base.value);
+    source.value = draft.source;
+    if (isNew.value) fresh.title.value = draft.title ?? fresh.title.value;
+    restored.value = { savedAt: draft.savedAt, base: base.value };
+  }
+
+  /** The restored text beside the latest revision, when it started from an older one. */
+  function compareRestored(): void {
+    const latest = workbench.revision.value;
+    if (latest && restored.value?.base) revisionSave.compareWith(latest, { base: restored.value.base, source: source.value });
   }
 
   async function saveRevision() {
@@ -84,11 +104,14 @@ export function useWorkbenchOpening(route: RouteLocationNormalizedLoaded) {
     await workbench.takeSaved(saved);
     live.adopt(saved.source, saved.analysis);
     base.value = saved.number;
-    restoredAt.value = null;
+    restored.value = null;
     return saved;
   }
 
   const createNew = () => fresh.create(source.value, note.value);
 
-  return { isNew, slug, source, base, note, restoredAt, dirty, workbench, live, selection, revisionSave, fresh, open, discardDraft, saveRevision, createNew };
+  return {
+    isNew, slug, source, base, note, restored, dirty, workbench, live, selection, revisionSave, fresh, drafts,
+    open, discardDraft, takeForeignDraft, compareRestored, saveRevision, createNew,
+  };
 }

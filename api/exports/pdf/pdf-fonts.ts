@@ -10,14 +10,16 @@ const require = createRequire(import.meta.url);
  * pdfkit embeds TrueType/OpenType; @fontsource/noto-sans ships only WOFF/WOFF2 files split into
  * script subsets, so the full Noto Sans TTFs come from @embedpdf/fonts-latin (OFL-1.1). Noto Sans
  * has no arrows (→ ⇌); those glyphs come from Noto Sans Math (@fontsource/noto-sans-math). Its
- * WOFF2 file, not the WOFF: fontkit inflates a WOFF table again on every read, a WOFF2 once.
+ * WOFF file, not the WOFF2: pdfkit's subset of a WOFF2 font copies its transformed glyph table, so
+ * every arrow was embedded as an empty outline (text for pdftotext, nothing on paper). The WOFF
+ * costs more (fontkit inflates its tables again on every read) but prints.
  */
 const notoDir = path.join(path.dirname(require.resolve('@embedpdf/fonts-latin')), '..', 'fonts');
 
 export const PDF_FONT_FILES = {
   text: path.join(notoDir, 'NotoSans-Regular.ttf'),
   bold: path.join(notoDir, 'NotoSans-Bold.ttf'),
-  symbols: require.resolve('@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff2'),
+  symbols: require.resolve('@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff'),
 } as const;
 
 export type PdfFontName = keyof typeof PDF_FONT_FILES;

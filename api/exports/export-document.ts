@@ -1,6 +1,6 @@
 import type { MechanismAnalysis } from '../chemistry/analysis-types';
 import type { EnthalpyEntry } from '../chemistry/thermo';
-import { EXPORT_SCHEMA_PATH, type AnswerKey, type ExportDocument, type MechanismExport } from './exports.schemas';
+import { EXPORT_SCHEMA_PATH, HANDOUT_CAUTIONS, type AnswerKey, type ExportDocument, type MechanismExport } from './exports.schemas';
 
 /** One revision to export, with its stored analysis and the set's note for it. */
 export interface ExportItem {
@@ -64,6 +64,7 @@ export function exportDocument(
     schema: EXPORT_SCHEMA_PATH,
     exportedAt: (options.now ?? new Date()).toISOString(),
     answerKey: options.answers,
+    cautions: [...HANDOUT_CAUTIONS],
     set: options.set,
     mechanisms: items.map((item) => mechanismExport(item, options.answers)),
   };

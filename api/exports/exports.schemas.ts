@@ -58,12 +58,24 @@ export const MechanismExport = z.object({
 });
 export type MechanismExport = z.infer<typeof MechanismExport>;
 
+/**
+ * The product's standing cautions (product.md). Every export is a handout that may travel without
+ * the application around it, so each format carries them itself.
+ */
+export const HANDOUT_CAUTIONS = [
+  'Results are computational checks, not a substitute for validated models or measurements.',
+  'Rate and thermochemical data carry the uncertainty of their sources.',
+  'Ozone, nitrogen oxides, halogens and UV sources are hazardous: handle them under local regulations and licensed laboratory practice.',
+] as const;
+
 export const ExportDocument = z.object({
   format: z.literal('cyclewright-export'),
   version: z.literal(1),
   schema: z.string(),
   exportedAt: z.string(),
   answerKey: z.boolean(),
+  // Optional when read so that exports written before the field existed still import.
+  cautions: z.array(z.string()).optional().describe('The cautions every handout carries: computational checks, data uncertainty, hazards'),
   set: z.object({ title: z.string(), audience: z.string() }).nullable(),
   mechanisms: z.array(MechanismExport).min(1),
 });

@@ -1,4 +1,4 @@
-import type { ExportDocument, MechanismExport } from './exports.schemas';
+import { HANDOUT_CAUTIONS, type ExportDocument, type MechanismExport } from './exports.schemas';
 import { equationCe, netCe, speciesCe } from './mhchem';
 import { rateText } from './number-format';
 
@@ -78,6 +78,7 @@ export function renderLatex(doc: ExportDocument): string {
     `\\title{${texText(title)}${doc.answerKey ? ' --- answer key' : ''}}`, '\\date{}', '\\begin{document}', '\\maketitle',
   ];
   if (doc.set?.audience) lines.push(`Audience: ${texText(doc.set.audience)}`, '');
+  lines.push('\\begin{quote}\\small\\textbf{Cautions}', '\\begin{itemize}', ...HANDOUT_CAUTIONS.map((caution) => `\\item ${texText(caution)}`), '\\end{itemize}', '\\end{quote}');
   for (const mechanism of doc.mechanisms) lines.push(...mechanismSection(mechanism));
   lines.push('\\end{document}');
   return `${lines.join('\n')}\n`;

@@ -1,4 +1,4 @@
-import type { ExportDocument, MechanismExport } from './exports.schemas';
+import { HANDOUT_CAUTIONS, type ExportDocument, type MechanismExport } from './exports.schemas';
 import { formatKj, formatNm, multipliersText, rateText, yesNo } from './number-format';
 
 // Inside a table cell a pipe ends the cell and a backtick ends code: escape or replace both.
@@ -44,6 +44,7 @@ export function renderMarkdown(doc: ExportDocument): string {
   const title = doc.set?.title ?? doc.mechanisms[0].title;
   const lines = [`# ${title}${doc.answerKey ? ' — answer key' : ''}`];
   if (doc.set?.audience) lines.push('', `Audience: ${doc.set.audience}`);
+  lines.push('', '> **Cautions**', '>', ...HANDOUT_CAUTIONS.map((caution) => `> - ${caution}`));
   doc.mechanisms.forEach((mechanism, index) => lines.push('', ...mechanismSection(mechanism, index)));
   return `${lines.join('\n')}\n`;
 }

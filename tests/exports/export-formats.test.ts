@@ -96,7 +96,7 @@ describe('Markdown export', () => {
 
 describe('CSV export', () => {
   it('reads back through csv-parse to the same steps, rates, classes, balance and ΔH', () => {
-    const rows = parseCsv(renderCsv(withAnswers), { columns: true, bom: false }) as Record<string, string>[];
+    const rows = parseCsv(renderCsv(withAnswers), { columns: true, bom: false, comment: '#' }) as Record<string, string>[];
     expect(rows).toHaveLength(allSteps.length);
     rows.forEach((row, index) => {
       const { mechanism, step, answer } = allSteps[index];
@@ -112,7 +112,7 @@ describe('CSV export', () => {
   });
 
   it('has no answer columns without the answer key', () => {
-    const [header] = parseCsv(renderCsv(withoutAnswers)) as string[][];
+    const [header] = parseCsv(renderCsv(withoutAnswers), { comment: '#' }) as string[][];
     expect(header).toEqual(['mechanism', 'revision', 'step', 'equation', 'rate']);
   });
 });

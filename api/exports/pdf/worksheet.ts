@@ -1,5 +1,5 @@
 import PDFDocument from 'pdfkit';
-import type { ExportDocument, MechanismExport } from '../exports.schemas';
+import { HANDOUT_CAUTIONS, type ExportDocument, type MechanismExport } from '../exports.schemas';
 import { formatKj, formatNm, multipliersText, rateText, yesNo } from '../number-format';
 import { drawNetwork } from './network-picture';
 import { pdfFonts } from './pdf-fonts';
@@ -49,6 +49,13 @@ function answerKeySection(doc: Doc, mechanism: MechanismExport): void {
   doc.moveDown(0.5);
 }
 
+/** The product's cautions, under the title of the first page, before any chemistry. */
+function cautionsBlock(doc: Doc): void {
+  doc.font('bold').fontSize(9).fillColor('#4b5563').text('Cautions', doc.page.margins.left, doc.y, { width: contentWidth(doc) });
+  doc.font('text').fontSize(8.5).list([...HANDOUT_CAUTIONS], { width: contentWidth(doc), bulletRadius: 1.5, textIndent: 10 });
+  doc.fillColor('#000000').moveDown(0.8);
+}
+
 function mechanismPages(doc: Doc, mechanism: MechanismExport, index: number): void {
   if (index > 0) doc.addPage();
   heading(doc, `${index + 1}. ${mechanism.title} (r${mechanism.revision})`, 14);
@@ -76,6 +83,7 @@ export function renderWorksheet(exported: ExportDocument): Promise<Buffer> {
   });
   heading(doc, `${exported.set?.title ?? exported.mechanisms[0].title}${exported.answerKey ? ' — with answer key' : ''}`, 18);
   if (exported.set?.audience) paragraph(doc, `Audience: ${exported.set.audience}`);
+  cautionsBlock(doc);
   exported.mechanisms.forEach((mechanism, index) => mechanismPages(doc, mechanism, index));
   if (exported.answerKey) {
     doc.addPage();

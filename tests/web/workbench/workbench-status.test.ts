@@ -19,6 +19,23 @@ describe('workbench status line', () => {
     expect(workbenchStatus(asAnalysis(hydrogenBromine)).text).toMatch(/· 1 productive route ·/);
   });
 
+  it('never says "balanced" while a line could not be read, and counts that line', () => {
+    // A4: Xq + O3 -> O2 among the cycle's steps: the engine gives no step for it, only an error at its line.
+    const analysis = structuredClone(asAnalysis(saltLake));
+    analysis.diagnostics.push({ severity: 'error', line: 11, column: 5, code: 'unknown-element', message: 'Xq is not an element symbol' } as never);
+    const status = workbenchStatus(analysis);
+    expect(status.text).toBe('5 steps read, 1 line not read · 1 productive route · 1 catalyst');
+    expect(status.text).not.toContain('balanced');
+    expect(status.level).toBe('error');
+    expect(status.problem).toBe('1 error');
+  });
+
+  it('does not count an error on a line that was read as a step as a line not read', () => {
+    const analysis = structuredClone(asAnalysis(saltLake));
+    analysis.diagnostics.push({ severity: 'error', line: 7, column: 30, code: 'rate-negative', message: 'the rate is negative' } as never);
+    expect(workbenchStatus(analysis).text).toBe('5 steps · balanced · 1 productive route · 1 catalyst');
+  });
+
   it('names errors beside the icon for a faulty text', () => {
     const status = workbenchStatus(asAnalysis(faulty));
     expect(status.level).toBe('error');

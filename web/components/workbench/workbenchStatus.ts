@@ -12,6 +12,16 @@ export interface WorkbenchStatus {
 
 const plural = (count: number, one: string, many = `${one}s`) => `${count} ${count === 1 ? one : many}`;
 
+/** Lines with an error that gave no step: a step line that failed to parse, or a broken directive. */
+function linesNotRead(analysis: MechanismAnalysis): number {
+  const stepLines = new Set(analysis.steps.map((step) => step.line));
+  const unread = new Set<number>();
+  for (const diagnostic of analysis.diagnostics) {
+    if (diagnostic.severity === 'error' && !stepLines.has(diagnostic.line)) unread.add(diagnostic.line);
+  }
+  return unread.size;
+}
+
 /** The workbench's one-line summary of an analysis, with its worst problem named. */
 export function workbenchStatus(analysis: MechanismAnalysis): WorkbenchStatus {
   const errors = analysis.diagnostics.filter((d) => d.severity === 'error').length;
@@ -24,9 +34,12 @@ export function workbenchStatus(analysis: MechanismAnalysis): WorkbenchStatus {
   const productive = counted.filter((route) => !route.reversesOneWay?.length).length;
   const backwards = counted.length - productive;
   const catalysts = analysis.species.filter((species) => species.role === 'catalyst').length;
+  const unread = linesNotRead(analysis);
+  // A line that could not be read is no step at all, so the counts and "balanced" would leave it
+  // out silently: the status names it instead and claims no balance for the whole text.
   const parts = [
-    plural(analysis.steps.length, 'step'),
-    unbalanced === 0 ? 'balanced' : `${unbalanced} unbalanced`,
+    unread === 0 ? plural(analysis.steps.length, 'step') : `${plural(analysis.steps.length, 'step')} read, ${plural(unread, 'line')} not read`,
+    unbalanced > 0 ? `${unbalanced} unbalanced` : unread === 0 ? 'balanced' : null,
     plural(productive, 'productive route') + (backwards > 0 ? ` (+ ${backwards} that ${backwards === 1 ? 'runs' : 'run'} a one-way step backwards)` : ''),
     plural(catalysts, 'catalyst'),
   ];
@@ -34,5 +47,5 @@ export function workbenchStatus(analysis: MechanismAnalysis): WorkbenchStatus {
   const problems = [errors && plural(errors, 'error'), warnings && plural(warnings, 'warning'), productive === 0 && analysis.steps.length > 0 && 'no productive route']
     .filter(Boolean)
     .join(', ');
-  return { level, text: parts.join(' · '), problem: problems || null };
+  return { level, text: parts.filter(Boolean).join(' · '), problem: problems || null };
 }

@@ -36,6 +36,7 @@ export const DIAGNOSTIC_CODES = {
   'not-elementary': { severity: 'info', meaning: 'non-integer coefficients (a lumped step)' },
   'odd-electrons-unmarked': { severity: 'warning', meaning: 'an odd-electron species written without a radical mark' },
   'even-electrons-marked': { severity: 'warning', meaning: 'a radical mark on an even-electron species without a state tag' },
+  'triplet-unmarked': { severity: 'info', meaning: 'a triplet state (O(3P)) without radical marks, so not counted as a radical' },
   'radical-marks-parity': { severity: 'warning', meaning: 'an even number of radical marks on an odd-electron species (OH••)' },
   'species-two-spellings': { severity: 'warning', meaning: 'one species written two ways (O and O(3P)), which the routes keep apart' },
   'step-class': { severity: 'info', meaning: 'a step that starts, branches or ends radical chains' },

@@ -20,11 +20,18 @@ function tagHint(item: RegisteredSpecies): string {
   return `with its term symbol, as in O2(a1Δg) or ${tagged('(3B1)')}`;
 }
 
+/** The state tag that names a triplet (a term symbol of multiplicity 3: (3P), (3Σg-), (3B1)), if any. */
+function tripletTag(item: RegisteredSpecies): string | null {
+  const match = /\(3[A-Z\u0391-\u03A9][^()]*\)/.exec(item.key);
+  return match ? match[0] : null;
+}
+
 /**
  * Radical bookkeeping per species, reported once at its first appearance: an odd electron
  * count without a mark (often deliberate: NO, NO2, ClO), or a mark on an even-electron species
  * without a state tag to say which state is meant, or an even number of marks on an odd-electron
- * species (OH••: an odd count has 1, 3… unpaired electrons).
+ * species (OH••: an odd count has 1, 3… unpaired electrons); and, as a note, a triplet state
+ * written without marks (O(3P)), which the notation counts as a radical only when marked.
  */
 export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagnostics: Diagnostic[]): void {
   for (const item of species) {
@@ -40,6 +47,10 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
       const marked = item.key.replace(/•+/, '•');
       const message = `${item.key} shows ${item.radicalMarks} unpaired electrons, but ${counted(item.electrons, 'electron')} leave an odd number unpaired; write ${marked}`;
       diagnostics.push(finding('radical-marks-parity', position, message, { found: item.key, expected: [marked] }));
+    } else if (!odd && item.radicalMarks === 0 && tripletTag(item)) {
+      const marked = item.key.replace(tripletTag(item) as string, `${tripletTag(item)}••`);
+      const message = `${item.key} is tagged as a triplet but has no radical mark, so step classes and chain carriers do not count it as a radical; write ${marked} to count its two unpaired electrons`;
+      diagnostics.push(finding('triplet-unmarked', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {
       const marks = item.radicalMarks === 1 ? 'mark' : 'marks';
       const message = `${item.key} has ${item.electrons} electrons (even); to count it as a radical give the state a tag and keep the ${marks} (${tagHint(item)}), or drop the ${marks}`;

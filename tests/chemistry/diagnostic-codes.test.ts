@@ -43,6 +43,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   'not-elementary': { text: '1/2 O2 + CO -> CO2', line: 1, column: 1 },
   'odd-electrons-unmarked': { text: 'NO + O3 -> NO2 + O2', line: 1, column: 1 },
   'even-electrons-marked': { text: 'O• + O3 -> 2 O2', line: 1, column: 1 },
+  'triplet-unmarked': { text: 'H• + O2 -> OH• + O(3P)', line: 1, column: 18 },
   'radical-marks-parity': { text: 'H2 + OH•• -> H2O + H•', line: 1, column: 6 },
   'step-class': { text: 'Br2 + hν -> 2 Br•', line: 1, column: 1 },
   'duplicate-label': { text: 'R1: O3 + hν -> O2 + O(3P)\nR1: O2 + hν -> 2 O(3P)', line: 2, column: 1 },

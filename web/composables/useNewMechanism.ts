@@ -2,6 +2,7 @@ import { ref, watch } from 'vue';
 import { ApiError } from '@web/services/http';
 import { createMechanism, type MechanismSummary, type Visibility } from '@web/services/mechanisms';
 import { fieldErrorsOf } from '@web/services/validation';
+import { sourceSizeProblem } from '@web/components/workbench/saveMessages';
 import { clearDraft } from './useDraftStorage';
 
 /** A new mechanism: title, visibility and the first text, saved together as r1. */
@@ -19,8 +20,10 @@ export function useNewMechanism() {
   async function create(source: string, changeNote: string): Promise<MechanismSummary | null> {
     titleError.value = title.value.trim() ? null : 'Give the mechanism a title';
     if (titleError.value || creating.value) return null;
+    const tooLong = sourceSizeProblem(source.length);
+    error.value = tooLong ? new Error(`The text has ${tooLong}`) : null;
+    if (tooLong) return null;
     creating.value = true;
-    error.value = null;
     try {
       const created = await createMechanism({ title: title.value.trim(), visibility: visibility.value, source, changeNote });
       clearDraft(null);

@@ -7,6 +7,7 @@ export interface ComparedTexts {
   latest: Pick<RevisionConflict['latest'], 'number' | 'source' | 'changeNote'>;
   yours: Pick<RevisionConflict['yours'], 'base' | 'source'>;
 }
+import { sourceSizeProblem } from '@web/components/workbench/saveMessages';
 import { clearDraft, writeDraft } from './useDraftStorage';
 
 function isConflict(error: unknown): error is ApiError & { details: RevisionConflict } {
@@ -32,6 +33,13 @@ export function useRevisionSave(slug: Ref<string | null>, base: Ref<number | nul
     saving.value = true;
     error.value = null;
     writeDraft(slug.value, { source: source.value, base: base.value });
+    const tooLong = sourceSizeProblem(source.value.length);
+    if (tooLong) {
+      // The server would refuse it the same way; saying so here spares sending a megabyte for nothing.
+      error.value = new Error(`The text has ${tooLong}`);
+      saving.value = false;
+      return null;
+    }
     try {
       const saved = await saveRevision(slug.value, { base: base.value, source: source.value, changeNote });
       clearDraft(slug.value);

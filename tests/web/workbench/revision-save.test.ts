@@ -66,6 +66,15 @@ describe('useRevisionSave', () => {
     expect(readDraft('salt-lake-bromine')?.source).toBe(MINE);
   });
 
+  it('refuses a text over the size limit without sending it, and keeps it as a draft', async () => {
+    const { save, source } = setup();
+    source.value = `# ${'x'.repeat(500_000)}\n`;
+    expect(await save.save('')).toBeNull();
+    expect(mechanisms.saveRevision).not.toHaveBeenCalled();
+    expect(save.error.value?.message).toBe('The text has 500,003 characters; a revision holds at most 500,000');
+    expect(readDraft('salt-lake-bromine')?.source).toBe(source.value);
+  });
+
   it('saves once at a time', async () => {
     let finish: (value: never) => void = () => {};
     vi.mocked(mechanisms.saveRevision).mockReturnValue(new Promise((resolve) => (finish = resolve)));

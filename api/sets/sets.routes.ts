@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import { requireRole, requireUser } from '../middleware/require-auth';
-import { CreateSetBody, SetParams, UpdateSetBody } from './sets.schemas';
+import { CreateSetBody, MechanismChoicesQuery, SetParams, UpdateSetBody } from './sets.schemas';
 import * as service from './sets.service';
 
 /** Mounted at /api/sets: instructors build sets; signed-in people read those they may see whole. */
@@ -15,6 +15,11 @@ export function setsRoutes(db: Knex): Router {
 
   router.post('/', requireRole('instructor'), async (req, res) => {
     res.status(201).json(await service.createSet(db, req.user!, CreateSetBody.parse(req.body)));
+  });
+
+  // Before `/:id`, which would read "mechanism-choices" as a set id.
+  router.get('/mechanism-choices', requireRole('instructor'), async (req, res) => {
+    res.json(await service.mechanismChoices(db, req.user!, MechanismChoicesQuery.parse(req.query).q));
   });
 
   router.get('/:id', async (req, res) => {

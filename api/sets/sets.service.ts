@@ -1,25 +1,41 @@
 import type { Knex } from 'knex';
 import * as audit from '../audit/audit.queries';
-import { AppError } from '../errors';
+import { AppError, NotFoundError } from '../errors';
 import { loadVisible, type Viewer } from '../mechanisms/access';
 import * as mechanisms from '../mechanisms/mechanisms.queries';
 import * as revisions from '../revisions/revisions.queries';
 import { loadOwnSet, loadReadableSet, visibleMechanismIds } from './set-access';
 import * as sets from './sets.queries';
-import type { CreateSetBody, SetDetail, SetItemInput, SetSummary, UpdateSetBody } from './sets.schemas';
+import { findChoices } from './set-choices.queries';
+import type { CreateSetBody, MechanismChoice, SetDetail, SetItemInput, SetSummary, UpdateSetBody } from './sets.schemas';
 
-/** Each item's mechanism must be visible to the instructor and its revision must exist. */
+/**
+ * Each item's mechanism must be visible to the instructor and its revision must exist. Refusals
+ * name the item as the editor numbers it (from 1) and the field, so the message stands beside it.
+ */
 async function resolveItems(trx: Knex.Transaction, viewer: Viewer, items: SetItemInput[]) {
   const resolved = [];
   for (const [index, item] of items.entries()) {
-    const { mechanism } = await loadVisible(trx, item.mechanism, viewer);
+    const mechanism = await visibleMechanism(trx, viewer, item.mechanism, index);
     const revision = await revisions.findByNumber(trx, mechanism.id, item.revision);
     if (!revision) {
-      throw new AppError(422, 'UNKNOWN_REVISION', `items.${index}: ${item.mechanism} has no revision r${item.revision}`, { field: `items.${index}.revision` });
+      const message = `Mechanism ${index + 1}: ${item.mechanism} has no revision r${item.revision} (latest is r${mechanism.latestRevisionNumber})`;
+      throw new AppError(422, 'UNKNOWN_REVISION', message, { field: `items.${index}.revision`, latest: mechanism.latestRevisionNumber });
     }
     resolved.push({ mechanismId: mechanism.id, revisionId: revision.id, note: item.note });
   }
   return resolved;
+}
+
+/** Still a 404, as for any mechanism one may not see, but saying that it may exist out of sight. */
+async function visibleMechanism(trx: Knex.Transaction, viewer: Viewer, slug: string, index: number) {
+  try {
+    return (await loadVisible(trx, slug, viewer)).mechanism;
+  } catch (error) {
+    if (!(error instanceof NotFoundError)) throw error;
+    const message = `Mechanism ${index + 1}: ${slug} is not visible to you or does not exist`;
+    throw new AppError(404, 'UNKNOWN_MECHANISM', message, { field: `items.${index}.mechanism` });
+  }
 }
 
 async function presentSet(db: Knex | Knex.Transaction, viewer: Viewer, id: number): Promise<SetDetail> {
@@ -27,7 +43,11 @@ async function presentSet(db: Knex | Knex.Transaction, viewer: Viewer, id: numbe
   const [owner] = await mechanisms.peopleByIds(db, [set.ownerId]);
   const shown = await Promise.all(items.map(async (item) => {
     const [mechanism, revision] = await Promise.all([mechanisms.findById(db, item.mechanismId), revisions.findById(db, item.revisionId)]);
-    return { position: item.position, mechanism: { slug: mechanism!.slug, title: mechanism!.title }, revision: revision!.number, note: item.note };
+    const reference = mechanism!.referenceRevisionId === null ? undefined : await revisions.findById(db, mechanism!.referenceRevisionId);
+    return {
+      position: item.position, revision: revision!.number, note: item.note,
+      mechanism: { slug: mechanism!.slug, title: mechanism!.title, latestRevision: mechanism!.latestRevisionNumber, referenceRevision: reference?.number ?? null },
+    };
   }));
   return { id: set.id, title: set.title, audience: set.audience, owner, items: shown, youOwn: set.ownerId === viewer.id, createdAt: set.createdAt, updatedAt: set.updatedAt };
 }
@@ -64,6 +84,11 @@ export async function deleteSet(db: Knex, viewer: Viewer, id: number): Promise<v
 }
 
 export const getSet = presentSet;
+
+/** What the set editor's picker offers: mechanisms the instructor can see, matching the typed text. */
+export function mechanismChoices(db: Knex, viewer: Viewer, text: string): Promise<MechanismChoice[]> {
+  return findChoices(db, viewer, text, 20);
+}
 
 /** Sets the viewer may read: their own, and those whose every mechanism they may see. */
 export async function listSets(db: Knex, viewer: Viewer): Promise<SetSummary[]> {

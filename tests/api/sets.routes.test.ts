@@ -83,3 +83,63 @@ describe('reading, changing and deleting sets', () => {
     }
   });
 });
+
+describe('what the set editor shows at its fields', () => {
+  it('words validation messages to stand at the field', async () => {
+    const res = await instructor.post('/api/sets', { title: ' ', items: [{ mechanism: '', revision: 1 }, { mechanism: 'set-public' }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([
+      { path: ['title'], message: 'Give the set a title' },
+      { path: ['items', '0', 'mechanism'], message: 'Choose a mechanism' },
+      { path: ['items', '1', 'revision'], message: 'Choose a revision' },
+    ]);
+  });
+
+  it('names the item, from 1, and the latest revision when a revision does not exist', async () => {
+    const res = await instructor.post('/api/sets', { title: 'x', items: [items[0], { mechanism: 'set-public', revision: 5 }] });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toMatchObject({
+      code: 'UNKNOWN_REVISION',
+      message: 'Mechanism 2: set-public has no revision r5 (latest is r2)',
+      details: { field: 'items.1.revision', latest: 2 },
+    });
+  });
+
+  it('says a mechanism one may not see is not visible or does not exist, without telling which', async () => {
+    for (const slug of ['set-private', 'no-such-mechanism']) {
+      const res = await instructor.post('/api/sets', { title: 'x', items: [{ mechanism: slug, revision: 1 }] });
+      expect(res.status).toBe(404);
+      expect(res.body.error).toMatchObject({
+        code: 'UNKNOWN_MECHANISM', message: `Mechanism 1: ${slug} is not visible to you or does not exist`, details: { field: 'items.0.mechanism' },
+      });
+    }
+  });
+
+  it('gives each item its mechanism\'s latest and reference revisions, to offer the others', async () => {
+    const { body } = await instructor.post('/api/sets', { title: 'Revisions', items: [items[1]] });
+    expect(body.items[0].mechanism).toEqual({ slug: 'set-public', title: 'Public bromine', latestRevision: 2, referenceRevision: null });
+  });
+});
+
+describe('GET /api/sets/mechanism-choices', () => {
+  const slugs = (res: { body: Array<{ slug: string }> }) => res.body.map((choice) => choice.slug);
+
+  it('offers the mechanisms the instructor can see, found by any part of the title or address', async () => {
+    const all = await instructor.get('/api/sets/mechanism-choices');
+    expect(all.status).toBe(200);
+    expect(slugs(all)).toContain('set-public');
+    expect(slugs(all)).not.toContain('set-private');
+    const typed = await instructor.get('/api/sets/mechanism-choices?q=ic%20brom');
+    expect(typed.body).toEqual([{ slug: 'set-public', title: 'Public bromine', visibility: 'public', ownerName: expect.any(String), latestRevision: 2, referenceRevision: null }]);
+    expect(slugs(await instructor.get('/api/sets/mechanism-choices?q=SET-PUB'))).toEqual(['set-public']);
+  });
+
+  it('reads % and _ as letters, not patterns', async () => {
+    expect((await instructor.get('/api/sets/mechanism-choices?q=%25')).body).toEqual([]);
+    expect((await instructor.get('/api/sets/mechanism-choices?q=set_public')).body).toEqual([]);
+  });
+
+  it('answers 403 to anyone without the instructor role', async () => {
+    expect((await owner.get('/api/sets/mechanism-choices')).status).toBe(403);
+  });
+});

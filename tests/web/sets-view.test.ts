@@ -18,8 +18,8 @@ const detail: sets.SetDetail = {
   ...summary,
   createdAt: '2026-11-28T09:00:00Z',
   items: [
-    { position: 1, mechanism: { slug: 'stratospheric-nox', title: 'Ozone and NOx' }, revision: 2, note: 'Start here' },
-    { position: 2, mechanism: { slug: 'clo-dimer', title: 'ClO dimer cycle' }, revision: 1, note: '' },
+    { position: 1, mechanism: { slug: 'stratospheric-nox', title: 'Ozone and NOx', latestRevision: 3, referenceRevision: 2 }, revision: 2, note: 'Start here' },
+    { position: 2, mechanism: { slug: 'clo-dimer', title: 'ClO dimer cycle', latestRevision: 1, referenceRevision: null }, revision: 1, note: '' },
   ],
 };
 

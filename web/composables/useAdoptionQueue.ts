@@ -1,5 +1,5 @@
 import { reactive, ref } from 'vue';
-import { adoptRound, getRound, listToAdopt, type RoundDetail, type QueuedRound } from '@web/services/reviews';
+import { adoptRound, getRound, listRemarks, listToAdopt, type QueuedRound, type Remark, type RoundDetail } from '@web/services/reviews';
 import { useReviewActivityStore } from '@web/stores/reviewActivity';
 import { useLoader } from './useLoader';
 
@@ -9,6 +9,8 @@ export function useAdoptionQueue() {
   const details = reactive<Record<number, RoundDetail>>({});
   const adoptingId = ref<number | null>(null);
   const adoptError = ref('');
+  /** A round whose adoption waits for the curator to confirm over its open remarks. */
+  const caution = ref<{ round: QueuedRound; remarks: Remark[] } | null>(null);
   const activity = useReviewActivityStore();
 
   async function load(): Promise<void> {
@@ -17,10 +19,14 @@ export function useAdoptionQueue() {
     for (const result of rounds) if (result.status === 'fulfilled') details[result.value.id] = result.value;
   }
 
-  async function adopt(round: QueuedRound): Promise<void> {
+  /** Adopts the round; with open remarks, first only lists them (`confirmed` adopts over them). */
+  async function adopt(round: QueuedRound, confirmed = false): Promise<void> {
     adoptingId.value = round.id;
     adoptError.value = '';
     try {
+      const open = confirmed ? [] : (await listRemarks(round.id)).filter((remark) => remark.state === 'open');
+      caution.value = open.length > 0 ? { round, remarks: open } : null;
+      if (caution.value) return;
       await adoptRound(round.id);
       activity.record();
       await load();
@@ -31,5 +37,5 @@ export function useAdoptionQueue() {
     }
   }
 
-  return { rounds: queue.data, pending: queue.pending, error: queue.error, details, load, adopt, adoptingId, adoptError };
+  return { rounds: queue.data, pending: queue.pending, error: queue.error, details, load, adopt, adoptingId, adoptError, caution };
 }

@@ -1,4 +1,4 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
 import MyReviewsView from '@web/views/MyReviewsView.vue';
 import ToAdoptView from '@web/views/ToAdoptView.vue';
@@ -8,15 +8,19 @@ import * as reviews from '@web/services/reviews';
 import { useReviewActivityStore } from '@web/stores/reviewActivity';
 import type { QueuedRound } from '@web/services/reviews';
 import { demoUser } from '../mount-app';
-import { demoRound } from './review-fixtures';
+import { demoRemark, demoRound } from './review-fixtures';
 import { mountWithProps } from './mount-with-props';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
-vi.mock('@web/services/reviews', () => ({ listMyReviews: vi.fn(), listToAdopt: vi.fn(), getRound: vi.fn(), adoptRound: vi.fn() }));
+vi.mock('@web/services/reviews', () => ({ listMyReviews: vi.fn(), listToAdopt: vi.fn(), getRound: vi.fn(), adoptRound: vi.fn(), listRemarks: vi.fn() }));
 
 const queued: QueuedRound = {
   id: 11, state: 'open', slug: 'salt-lake-bromine', title: 'Bromine release over the salt lake', revision: 3, updatedAt: '2026-11-24T08:00:00.000Z',
 };
+
+beforeEach(() => {
+  vi.mocked(reviews.listRemarks).mockResolvedValue([]);
+});
 
 afterEach(() => {
   vi.clearAllMocks();
@@ -82,5 +86,22 @@ describe('ToAdoptView', () => {
     await wrapper.get('tbody button').trigger('click');
     await flushPromises();
     expect(wrapper.get('[role="alert"]').text()).toBe('Bromine release over the salt lake, r3: Only a round that is endorsed can be adopted; this one is open');
+  });
+
+  it('lists the open remarks before adopting and adopts only once the curator confirms', async () => {
+    vi.mocked(reviews.listToAdopt).mockResolvedValue([{ ...queued, state: 'endorsed' }]);
+    vi.mocked(reviews.getRound).mockResolvedValue(demoRound({ state: 'endorsed', endorsements: 2 }));
+    vi.mocked(reviews.listRemarks).mockResolvedValue([demoRemark({ stepLabel: 'B3', body: 'Is the photolysis frequency for noon?' })]);
+    vi.mocked(reviews.adoptRound).mockResolvedValue(demoRound({ state: 'adopted' }));
+    const wrapper = await mountView(ToAdoptView, ['curator']);
+    await wrapper.get('tbody button').trigger('click');
+    await flushPromises();
+    expect(reviews.adoptRound).not.toHaveBeenCalled();
+    const caution = wrapper.get('[role="alertdialog"]');
+    expect(caution.text()).toContain('Step B3 — Kofi Glasswort: Is the photolysis frequency for noon?');
+    await caution.findAll('button').find((b) => b.text() === 'Adopt r3 anyway')!.trigger('click');
+    await flushPromises();
+    expect(reviews.adoptRound).toHaveBeenCalledWith(11);
+    expect(wrapper.find('[role="alertdialog"]').exists()).toBe(false);
   });
 });

@@ -5,7 +5,7 @@ import * as auth from '@web/services/auth';
 import * as reviews from '@web/services/reviews';
 import type { Role } from '@web/services/types';
 import { demoUser } from '../mount-app';
-import { demoMechanism, demoRound } from './review-fixtures';
+import { demoMechanism, demoRemark, demoRound } from './review-fixtures';
 import { mountWithProps } from './mount-with-props';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
@@ -18,12 +18,13 @@ afterEach(() => {
   document.body.innerHTML = '';
 });
 
-async function mountPanel(roles: Role[], userId: number, options: { round?: ReturnType<typeof demoRound> | null; youCanEdit?: boolean } = {}) {
+type PanelOptions = { round?: ReturnType<typeof demoRound> | null; youCanEdit?: boolean; remarks?: ReturnType<typeof demoRemark>[] };
+async function mountPanel(roles: Role[], userId: number, options: PanelOptions = {}) {
   const round = options.round === undefined ? demoRound() : options.round;
   vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(roles, { id: userId }), csrfToken: 't' });
   vi.mocked(reviews.listRounds).mockResolvedValue(round ? [{ id: round.id, state: round.state, revision: round.revision, createdAt: round.createdAt, closedAt: null }] : []);
   if (round) vi.mocked(reviews.getRound).mockResolvedValue(round);
-  vi.mocked(reviews.listRemarks).mockResolvedValue([]);
+  vi.mocked(reviews.listRemarks).mockResolvedValue(options.remarks ?? []);
   vi.mocked(reviews.findPeople).mockResolvedValue([{ id: 4, name: 'Anouk Spartina', roles: ['curator'] }]);
   const mechanism = demoMechanism({ youCanEdit: options.youCanEdit ?? false, activeRound: null });
   const { wrapper } = await mountWithProps(WorkbenchReviewPanel, { mechanism, revision: null, source: '', analysis: null, selectedStep: null });
@@ -57,6 +58,22 @@ describe('WorkbenchReviewPanel', () => {
     expect(wrapper.find('#reviewer-picker').exists()).toBe(true);
     expect(wrapper.find('.review-verdict-form').exists()).toBe(false);
     await wrapper.findAll('button').find((b) => b.text() === 'Adopt r2')!.trigger('click');
+    await flushPromises();
+    expect(reviews.adoptRound).toHaveBeenCalledWith(11);
+  });
+
+  it('cautions a curator about open remarks, listing them, and adopts only once confirmed', async () => {
+    vi.mocked(reviews.adoptRound).mockResolvedValue(demoRound({ state: 'adopted' }));
+    const remarks = [demoRemark(), demoRemark({ id: 22, state: 'settled', stepLabel: 'N2', body: 'Fine now' })];
+    const wrapper = await mountPanel(['curator'], 4, { round: demoRound({ state: 'endorsed', endorsements: 2 }), remarks });
+    await wrapper.findAll('button').find((b) => b.text() === 'Adopt r2')!.trigger('click');
+    await flushPromises();
+    expect(reviews.adoptRound).not.toHaveBeenCalled();
+    const caution = wrapper.get('[role="alertdialog"]');
+    expect(caution.text()).toContain('1 remark is still open on r2');
+    expect(caution.text()).toContain('Step N1 — Kofi Glasswort: Check the **rate**');
+    expect(caution.text()).not.toContain('Fine now');
+    await caution.findAll('button').find((b) => b.text() === 'Adopt r2 anyway')!.trigger('click');
     await flushPromises();
     expect(reviews.adoptRound).toHaveBeenCalledWith(11);
   });

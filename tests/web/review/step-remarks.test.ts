@@ -49,7 +49,13 @@ describe('describeTimeline', () => {
     expect(lines.map((line) => line.text)).toEqual([
       'Rosalind Samphire opened the round on r1',
       'Anouk Spartina assigned Kofi Glasswort as reviewer',
-      'The round went from open to revise requested (verdict revise)',
+      'Kofi Glasswort moved the round from open to revise requested (verdict revise)',
     ]);
+  });
+
+  it('names the curator who adopted, not only the states', () => {
+    const adopted = { id: 9, actorId: 4, action: 'round.state-changed', details: { from: 'endorsed', to: 'adopted', revision: 2 }, createdAt: '2026-11-22T09:00:00.000Z' };
+    const [line] = describeTimeline([adopted], new Map([[4, 'Anouk Spartina']]));
+    expect(line.text).toBe('Anouk Spartina moved the round from endorsed to adopted');
   });
 });

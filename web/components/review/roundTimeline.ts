@@ -17,9 +17,9 @@ const DESCRIPTIONS: Record<string, Describe> = {
   'round.opened': (e, name) => ({ icon: 'pi pi-flag', text: `${name(e.actorId)} opened the round on r${e.details.revision}` }),
   'round.reviewer-assigned': (e, name) => ({ icon: 'pi pi-user-plus', text: `${name(e.actorId)} assigned ${name(e.details.reviewerId)} as reviewer` }),
   'verdict.given': (e, name) => ({ icon: 'pi pi-check-square', text: `${name(e.actorId)} gave the verdict “${e.details.verdict}” on r${e.details.revision}` }),
-  'round.state-changed': (e) => ({
+  'round.state-changed': (e, name) => ({
     icon: 'pi pi-arrow-right',
-    text: `The round went from ${stateWord(e.details.from)} to ${stateWord(e.details.to)}${e.details.reason ? ` (${e.details.reason})` : ''}`,
+    text: `${name(e.actorId)} moved the round from ${stateWord(e.details.from)} to ${stateWord(e.details.to)}${e.details.reason ? ` (${e.details.reason})` : ''}`,
   }),
   'round.revision-entered': (e, name) => ({ icon: 'pi pi-history', text: `${name(e.actorId)} saved r${e.details.revision}; it entered the round` }),
   'remarks.followed': (e) => ({

@@ -116,6 +116,14 @@ describe('WorkbenchRoutesPanel', () => {
     expect(text).toContain(bromine.intermediatesExplanation);
   });
 
+  it('lists the species routes cancel with the role the Species panel gives them (Br• a catalyst)', () => {
+    const wrapper = mountPanel(WorkbenchRoutesPanel, bromine);
+    expect(wrapper.text()).toContain('Cancelled in routes (intermediates and catalysts)');
+    expect(wrapper.text()).not.toMatch(/(^|\s)Intermediates(\s|$)/);
+    const listed = wrapper.findAll('.workbench-routes-panel__cancelled li').map((item) => item.text().replace(/\s+/g, ' ').trim());
+    expect(listed).toEqual(['Br• catalyst', 'BrO• intermediate', 'O(3P) intermediate']);
+  });
+
   it('selects a step from its stoichiometric number', async () => {
     const wrapper = mountPanel(WorkbenchRoutesPanel, bromine);
     await wrapper.find('.workbench-routes-panel__step').trigger('click');

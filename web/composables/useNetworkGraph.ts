@@ -3,6 +3,7 @@ import type { Core, EventObject } from 'cytoscape';
 import type { NetworkModel } from '@web/components/workbench/network/networkModel';
 import { createNetworkCore, drawNetwork, updateNetworkData } from '@web/components/workbench/network/networkGraph';
 import { planLayout } from '@web/components/workbench/network/networkLayout';
+import { placeStepLabels } from '@web/components/workbench/network/networkStepLabels';
 import { downloadBlob, graphToSvg } from '@web/components/workbench/network/networkSnapshot';
 
 const structureOf = (model: NetworkModel) => `${model.nodes.map((n) => n.id).join('|')}#${model.edges.map((e) => e.id).join('|')}`;
@@ -29,6 +30,8 @@ export function useNetworkGraph(container: Ref<HTMLElement | null>, model: Ref<N
       hovered.value = { label: String(event.target.data('key') ?? event.target.data('step')), role: event.target.data('role') ?? null };
     });
     instance.on('mouseout', 'node', () => (hovered.value = null));
+    // A dragged node moves arrows of its neighbours: their steps' labels find free room again.
+    instance.on('dragfree', 'node', () => placeStepLabels(instance));
     cy.value = instance;
     await sync(model.value, planned);
     status.value = 'ready';

@@ -3,6 +3,7 @@ import type { Positions } from './largeGraphLayout';
 import { LARGE_GRAPH_NODES, loadCytoscape, planLayout, rendererOptions, runFcose } from './networkLayout';
 import type { NetworkModel } from './networkModel';
 import { networkStyleFor } from './networkStyle';
+import { placeStepLabels } from './networkStepLabels';
 
 /** The model as cytoscape elements, in one array so that they are added in one batch, placed when positions are known. */
 export function elementsOf(model: NetworkModel, positions: Positions | null = null): ElementDefinition[] {
@@ -33,6 +34,7 @@ export async function drawNetwork(cy: Core, model: NetworkModel, planned = planL
     cy.add(elementsOf(model, positions));
   });
   if (!positions) await runFcose(cy);
+  placeStepLabels(cy);
   // The tab may have changed size while the layout ran: fit to the box as it is now.
   cy.resize();
   cy.fit(undefined, 24);
@@ -55,5 +57,7 @@ export function updateNetworkData(cy: Core, model: NetworkModel): number {
       changed += 1;
     }
   });
+  // A step that joins or leaves the route changes size and font: its label is placed again.
+  if (changed > 0) placeStepLabels(cy);
   return changed;
 }

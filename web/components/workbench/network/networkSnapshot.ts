@@ -3,6 +3,11 @@ import { networkSvg, type SvgEdge, type SvgNode } from './networkSvg';
 
 const numberOf = (value: unknown) => Number.parseFloat(String(value)) || 0;
 
+function labelCentreOf(node: NodeSingular): { x: number; y: number } {
+  const box = node.boundingBox({ includeNodes: false, includeEdges: false, includeLabels: true, includeOverlays: false });
+  return { x: (box.x1 + box.x2) / 2, y: (box.y1 + box.y2) / 2 };
+}
+
 function snapshotNode(node: NodeSingular): SvgNode {
   const { x, y } = node.position();
   return {
@@ -13,6 +18,7 @@ function snapshotNode(node: NodeSingular): SvgNode {
     dashed: node.style('border-style') === 'dashed',
     rounded: node.data('kind') === 'species',
     opacity: numberOf(node.style('opacity')),
+    labelCentre: node.data('kind') === 'step' ? labelCentreOf(node) : undefined,
   };
 }
 

@@ -8,6 +8,8 @@ const FONT = '"Noto Sans", system-ui, sans-serif';
  * The graph's look. Every role has a shape or border style and a label mark besides its colour:
  * catalysts a double amber border and the word "catalyst", intermediates a hollow dashed teal
  * outline and "◌", steps small squares; the selected route is drawn thick and the rest faded.
+ * A step's label starts under its square and is moved where its arrows leave room
+ * (networkStepLabels.ts), on a white ground so that an arrow passing behind it does not cut it.
  */
 const nodeStyle: StylesheetJson = [
   {
@@ -31,7 +33,7 @@ const nodeStyle: StylesheetJson = [
     style: {
       shape: 'rectangle', width: 11, height: 11, 'background-color': graphite[500], label: 'data(label)',
       'font-family': FONT, 'font-size': 9, color: graphite[600], 'text-valign': 'bottom', 'text-margin-y': 3,
-      'min-zoomed-font-size': 6,
+      'min-zoomed-font-size': 6, 'text-background-color': '#ffffff', 'text-background-opacity': 0.85, 'text-background-padding': '1px',
     },
   },
   { selector: 'node[kind = "step"][?inRoute]', style: { width: 17, height: 17, 'background-color': ink[600], color: ink[800], 'font-size': 11, 'font-weight': 'bold' } },

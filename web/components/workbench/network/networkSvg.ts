@@ -11,6 +11,8 @@ export interface SvgNode {
   dashed: boolean;
   rounded: boolean;
   opacity: number;
+  /** Where a step's label was drawn (its centre); under the square when not given. */
+  labelCentre?: { x: number; y: number };
 }
 
 export interface SvgEdge {
@@ -44,6 +46,12 @@ function edgeSvg(edge: SvgEdge): string {
   return `${line}<text x="${mid.x.toFixed(1)}" y="${mid.y.toFixed(1)}" font-size="10" text-anchor="middle">${escapeXml(edge.label)}</text>`;
 }
 
+/** A step's label where the graph drew it; 3 px below the centre puts a 9 px line's middle there. */
+function stepLabelSvg(node: SvgNode): string {
+  const at = node.labelCentre ? { x: node.labelCentre.x, y: node.labelCentre.y + 3 } : { x: node.x, y: node.y + node.height / 2 + 11 };
+  return `<text font-size="9" text-anchor="middle" x="${at.x.toFixed(1)}" y="${at.y.toFixed(1)}">${escapeXml(node.label)}</text>`;
+}
+
 function nodeSvg(node: SvgNode): string {
   const x = node.x - node.width / 2;
   const y = node.y - node.height / 2;
@@ -53,14 +61,21 @@ function nodeSvg(node: SvgNode): string {
   const firstLine = node.y - ((lines.length - 1) * 13) / 2 + 4;
   const text = lines.map((line, i) => `<tspan x="${node.x.toFixed(1)}" y="${(firstLine + i * 13).toFixed(1)}">${escapeXml(line)}</tspan>`).join('');
   const box = `<rect x="${x.toFixed(1)}" y="${y.toFixed(1)}" width="${node.width.toFixed(1)}" height="${node.height.toFixed(1)}"${radius} fill="${node.fill}" stroke="${node.stroke}" stroke-width="${node.strokeWidth}"${dash}/>`;
-  const label = node.rounded ? `<text font-size="12" text-anchor="middle">${text}</text>` : `<text font-size="9" text-anchor="middle" x="${node.x.toFixed(1)}" y="${(node.y + node.height / 2 + 11).toFixed(1)}">${escapeXml(node.label)}</text>`;
+  const label = node.rounded ? `<text font-size="12" text-anchor="middle">${text}</text>` : stepLabelSvg(node);
   return `<g opacity="${node.opacity}">${box}${label}</g>`;
+}
+
+/** The reach of a placed step label along one axis (a 9 px line is about 5.5 px a character), so the picture holds it. */
+function labelSpan(node: SvgNode, axis: 'x' | 'y'): number[] {
+  if (!node.labelCentre) return [];
+  const half = axis === 'x' ? (node.label.length * 5.5) / 2 : 7;
+  return [node.labelCentre[axis] - half, node.labelCentre[axis] + half];
 }
 
 /** A standalone SVG document of the laid-out network: boxes, straight arrows and labels. */
 export function networkSvg(nodes: SvgNode[], edges: SvgEdge[], padding = 24): string {
-  const xs = nodes.flatMap((n) => [n.x - n.width / 2, n.x + n.width / 2]);
-  const ys = nodes.flatMap((n) => [n.y - n.height / 2, n.y + n.height / 2 + 14]);
+  const xs = nodes.flatMap((n) => [n.x - n.width / 2, n.x + n.width / 2, ...labelSpan(n, 'x')]);
+  const ys = nodes.flatMap((n) => [n.y - n.height / 2, n.y + n.height / 2 + 14, ...labelSpan(n, 'y')]);
   const left = (nodes.length ? Math.min(...xs) : 0) - padding;
   const top = (nodes.length ? Math.min(...ys) : 0) - padding;
   const width = (nodes.length ? Math.max(...xs) : 0) - left + padding;

@@ -170,7 +170,14 @@ describe('the review journey in the browser', () => {
     // A reload would make a fresh page; a marker on this one shows none happened.
     await page.evaluate(() => Object.assign(window, { notReloaded: true }));
     await page.getByRole('button', { name: 'Adopt r2' }).click();
+    // The reviewer's remark on N1 is still open: it is listed, and adopting takes a confirmation.
+    const caution = page.getByRole('alertdialog');
+    await caution.waitFor();
+    await expect(caution.textContent()).resolves.toContain('Step N1 — Kofi Glasswort: Is the **N1** rate');
+    await screenshot(page, 'review-8-adopt-caution');
+    await caution.getByRole('button', { name: 'Adopt r2 anyway' }).click();
     await expect.poll(() => badge.textContent()).toBe('adopted');
+    await expect.poll(() => page.getByLabel('Round timeline').textContent()).toContain('Anouk Spartina moved the round from endorsed to adopted');
     await expect.poll(() => page.locator('.workbench-header .p-select-label').textContent()).toMatch(/^r2 ★ reference/);
     await expect.poll(() => queueCount.count()).toBe(0);
     await expect(page.evaluate(() => (window as unknown as { notReloaded?: boolean }).notReloaded)).resolves.toBe(true);

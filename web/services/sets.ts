@@ -1,6 +1,6 @@
 import type { ExportFormat } from '@api/exports/exports.schemas';
-import type { CreateSetBody, SetDetail as ServerSetDetail, SetSummary as ServerSetSummary } from '@api/sets/sets.schemas';
-import { http } from './http';
+import type { CreateSetBody, MechanismChoice, SetDetail as ServerSetDetail, SetSummary as ServerSetSummary } from '@api/sets/sets.schemas';
+import { http, request } from './http';
 import type { Jsonified } from './jsonified';
 
 /** The sets API's answers as JSON: the server's types with dates as strings. */
@@ -8,6 +8,7 @@ export type SetSummary = Jsonified<ServerSetSummary>;
 export type SetDetail = Jsonified<ServerSetDetail>;
 
 export type SetInput = CreateSetBody;
+export type { MechanismChoice };
 
 export function listSets(): Promise<SetSummary[]> {
   return http.get<SetSummary[]>('/api/sets');
@@ -19,6 +20,16 @@ export function getSet(id: number): Promise<SetDetail> {
 
 export function createSet(input: SetInput): Promise<SetDetail> {
   return http.post<SetDetail>('/api/sets', input);
+}
+
+/** Replaces the title, audience and the whole ordered list of items. */
+export function updateSet(id: number, input: SetInput): Promise<SetDetail> {
+  return request<SetDetail>(`/api/sets/${id}`, { method: 'PATCH', body: input });
+}
+
+/** Mechanisms the instructor may put in a set whose title or address holds `text`. */
+export function listMechanismChoices(text: string, signal?: AbortSignal): Promise<MechanismChoice[]> {
+  return http.get<MechanismChoice[]>(`/api/sets/mechanism-choices?${new URLSearchParams({ q: text })}`, { signal });
 }
 
 export function deleteSet(id: number): Promise<void> {

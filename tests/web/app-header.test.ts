@@ -50,9 +50,37 @@ describe('TheAppHeader', () => {
     expect(navLabels(wrapper)).toEqual(expected);
   });
 
+  it.each<[Role[], string[]]>([
+    [['author'], ['Library', 'Catalogue', 'Sets', 'Import']],
+    [['author', 'reviewer', 'curator'], ['Library', 'Catalogue', 'Sets', 'Import', 'My reviews', 'To adopt']],
+  ])('for roles %j folds the same links %j behind the menu button (shown on narrow windows)', async (roles, expected) => {
+    const { wrapper } = await headerFor(roles);
+    const button = wrapper.get('button[aria-controls="header-nav-menu"]');
+    expect(button.attributes('aria-label')).toBe('Menu');
+    expect(button.attributes('aria-expanded')).toBe('false');
+    await button.trigger('click');
+    await flushPromises();
+    const entries = [...document.body.querySelectorAll('#header-nav-menu [role="menuitem"]')].map((item) => item.textContent!.trim());
+    expect(entries).toEqual(expected);
+  });
+
+  it('goes to the page of a link picked in the folded menu, and marks the page shown', async () => {
+    const { wrapper, router } = await headerFor(['author']);
+    await wrapper.get('button[aria-controls="header-nav-menu"]').trigger('click');
+    await flushPromises();
+    const link = (label: string) =>
+      [...document.body.querySelectorAll<HTMLAnchorElement>('#header-nav-menu a')].find((a) => a.textContent!.trim() === label)!;
+    expect(link('Library').getAttribute('aria-current')).toBe('page');
+    expect(link('Catalogue').getAttribute('href')).toBe('/catalogue');
+    link('Catalogue').click();
+    await eventually(() => expect(router.currentRoute.value.name).toBe('catalogue'));
+  });
+
   it("puts the person's name on the menu button, with Account and Sign out for everyone", async () => {
     const { wrapper } = await headerFor(['author']);
     expect(wrapper.get('button[aria-controls="person-menu"]').text()).toBe('Ines Marlow');
+    // The name is also the button's accessible name, for phones where only its icon shows.
+    expect(wrapper.get('button[aria-controls="person-menu"]').attributes('aria-label')).toBe('Ines Marlow');
     expect(await personMenuLabels(wrapper)).toEqual(['Account', 'Sign out']);
   });
 

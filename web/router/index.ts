@@ -4,9 +4,10 @@ import { useSessionStore } from '@web/stores/session';
 import { createSessionGuard } from './guard';
 import { trackNavigation } from './progress';
 import { routes } from './routes';
+import { scrollBehavior } from './scroll';
 
 export function createAppRouter(pinia: Pinia, history: RouterHistory = createWebHistory()) {
-  const router = createRouter({ history, routes });
+  const router = createRouter({ history, routes, scrollBehavior });
   trackNavigation(router);
   router.beforeEach(createSessionGuard(useSessionStore(pinia)));
   router.afterEach((to) => {

@@ -5,13 +5,17 @@ import { compareRevisions as compareOnServer } from '@api/comparison/compare';
 import { analyseSource } from '@api/revisions/analyse-source';
 import CompareView from '@web/views/CompareView.vue';
 import * as auth from '@web/services/auth';
+import { ApiError } from '@web/services/http';
+import * as mechanisms from '@web/services/mechanisms';
 import * as revisions from '@web/services/revisions';
 import type { Comparison } from '@web/services/revisions';
-import { demoUser } from '../mount-app';
+import { demoUser, eventually } from '../mount-app';
 import { mountWithProps } from './mount-with-props';
+import { demoMechanism } from './review-fixtures';
 
 vi.mock('@web/services/auth', () => ({ fetchSession: vi.fn(), GITHUB_SIGN_IN_PATH: '/auth/github' }));
 vi.mock('@web/services/revisions', () => ({ compareRevisions: vi.fn() }));
+vi.mock('@web/services/mechanisms', () => ({ getMechanism: vi.fn() }));
 
 const r1 = readFileSync('examples/stratospheric-nox.steps', 'utf8');
 // r2: a new rate for N1, the O + O3 loss step dropped, chlorine's ozone step added.
@@ -58,5 +62,17 @@ describe('CompareView', () => {
     const { wrapper } = await mountWithProps(CompareView, {}, '/m/stratospheric-nox/compare');
     expect(wrapper.text()).toContain('Pick two revisions');
     expect(revisions.compareRevisions).not.toHaveBeenCalled();
+  });
+
+  it("is headed by the mechanism's title, not the slug of its address", async () => {
+    vi.mocked(auth.fetchSession).mockResolvedValue({ user: demoUser(['author']), csrfToken: 't' });
+    vi.mocked(mechanisms.getMechanism).mockResolvedValue(demoMechanism());
+    // The comparison itself is not what this test reads: it may fail without hiding the heading.
+    vi.mocked(revisions.compareRevisions).mockRejectedValue(new ApiError(503, 'HTTP_503', 'down'));
+    const { wrapper } = await mountWithProps(CompareView, {}, '/m/stratospheric-nox/compare?from=1&to=2');
+    await eventually(() => expect(wrapper.get('h1').text()).toContain('Ozone production and catalytic loss by nitrogen oxides'));
+    expect(wrapper.get('h1').text()).not.toContain('stratospheric-nox');
+    expect(wrapper.get('h1').text()).toContain('Compare revisions');
+    expect(mechanisms.getMechanism).toHaveBeenCalledWith('stratospheric-nox');
   });
 });

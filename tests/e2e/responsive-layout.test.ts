@@ -184,6 +184,28 @@ describe('new mechanism, history and comparison', () => {
   });
 });
 
+describe('at 768 px wide (a tablet)', () => {
+  it('keeps the header on one row: word-mark, search, folded links and the person\'s name', async () => {
+    const page = await signedIn({ width: 768, height: 1024 });
+    const header = page.getByRole('banner');
+    const row = [
+      header.getByRole('link', { name: 'Cyclewright, go to the library' }),
+      header.getByRole('searchbox'),
+      header.getByRole('button', { name: 'Menu' }),
+      header.getByRole('button', { name: MEI.name }),
+    ];
+    const middles = await Promise.all(row.map(async (part) => {
+      const { y, height } = (await part.boundingBox())!;
+      return y + height / 2;
+    }));
+    expect(Math.max(...middles) - Math.min(...middles)).toBeLessThan(4);
+    expect(await header.getByRole('button', { name: MEI.name }).textContent()).toContain(MEI.name);
+    expect(await pageWidth(page)).toBeLessThanOrEqual(768);
+    await screenshot(page, 'responsive-768-library');
+    await page.close();
+  });
+});
+
 describe.each([1280, 1920])('at %i px wide', (width) => {
   it('keeps the header links in a row and the workbench in two halves', async () => {
     const page = await signedIn({ width, height: 900 });

@@ -46,17 +46,19 @@ async function openSection(page: Page, name: string): Promise<void> {
 
 describe('at 390 px wide (a phone)', () => {
   it.each([
-    ['library', '/', 'heading'],
-    ['workbench', `/m/${SLUG}`, 'status'],
-    ['sets', '/sets', 'heading'],
-    ['catalogue', '/catalogue', 'heading'],
+    ['library', '/', 'h1'],
+    ['workbench', `/m/${SLUG}`, '.cm-content'],
+    ['workbench Kinetics section', `/m/${SLUG}#kinetics`, '#kinetics-T'],
+    ['sets', '/sets', 'h1'],
+    ['catalogue', '/catalogue', 'h1'],
+    ['account', '/account', '.account-view__details dd'],
   ])('the %s page does not scroll sideways', async (name, path, ready) => {
     const page = await signedIn(PHONE);
     await page.goto(`${t.url}${path}`);
-    await page.getByRole(ready as 'heading' | 'status').first().waitFor();
+    await page.locator(ready).first().waitFor();
     await page.waitForLoadState('networkidle');
     expect(await pageWidth(page), name).toBeLessThanOrEqual(PHONE.width);
-    await screenshot(page, `responsive-390-${name}`);
+    await screenshot(page, `responsive-390-${name.replace(/\s+/g, '-')}`);
     await page.close();
   });
 

@@ -173,7 +173,7 @@ describe('the review journey in the browser', () => {
     // The reviewer's remark on N1 is still open: it is listed, and adopting takes a confirmation.
     const caution = page.getByRole('alertdialog');
     await caution.waitFor();
-    await expect(caution.textContent()).resolves.toContain('Step N1 — Kofi Glasswort: Is the **N1** rate');
+    await expect(caution.textContent()).resolves.toContain('Step N1 — Kofi Glasswort: Is the N1 rate');
     await screenshot(page, 'review-8-adopt-caution');
     await caution.getByRole('button', { name: 'Adopt r2 anyway' }).click();
     await expect.poll(() => badge.textContent()).toBe('adopted');

@@ -91,7 +91,7 @@ describe('ToAdoptView', () => {
   it('lists the open remarks before adopting and adopts only once the curator confirms', async () => {
     vi.mocked(reviews.listToAdopt).mockResolvedValue([{ ...queued, state: 'endorsed' }]);
     vi.mocked(reviews.getRound).mockResolvedValue(demoRound({ state: 'endorsed', endorsements: 2 }));
-    vi.mocked(reviews.listRemarks).mockResolvedValue([demoRemark({ stepLabel: 'B3', body: 'Is the photolysis frequency for noon?' })]);
+    vi.mocked(reviews.listRemarks).mockResolvedValue([demoRemark({ stepLabel: 'B3', body: 'Is the photolysis frequency for noon?', bodyHtml: '<p>Is the photolysis frequency for noon?</p>\n' })]);
     vi.mocked(reviews.adoptRound).mockResolvedValue(demoRound({ state: 'adopted' }));
     const wrapper = await mountView(ToAdoptView, ['curator']);
     await wrapper.get('tbody button').trigger('click');

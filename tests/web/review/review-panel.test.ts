@@ -71,7 +71,8 @@ describe('WorkbenchReviewPanel', () => {
     expect(reviews.adoptRound).not.toHaveBeenCalled();
     const caution = wrapper.get('[role="alertdialog"]');
     expect(caution.text()).toContain('1 remark is still open on r2');
-    expect(caution.text()).toContain('Step N1 — Kofi Glasswort: Check the **rate**');
+    expect(caution.text()).toContain('Step N1 — Kofi Glasswort: Check the rate');
+    expect(caution.text()).not.toContain('**');
     expect(caution.text()).not.toContain('Fine now');
     await caution.findAll('button').find((b) => b.text() === 'Adopt r2 anyway')!.trigger('click');
     await flushPromises();

@@ -54,6 +54,7 @@ export const DIAGNOSTIC_CODES = {
   'enthalpy-missing': { severity: 'info', meaning: 'species without an enthalpy of formation' },
   'rate-expression': { severity: 'error', meaning: 'a rate expression that cannot be evaluated (syntax, or a name or function not allowed)' },
   'rate-not-finite': { severity: 'error', meaning: 'a rate expression that is infinite or not a number at the mechanism\'s conditions' },
+  'third-body-unknown': { severity: 'warning', meaning: 'a rate that reads [M] where [M] has no value (a surface unit without M in %conditions)' },
   'rate-negative': { severity: 'error', meaning: 'a rate expression that is negative at the mechanism\'s conditions' },
   'rate-count': { severity: 'warning', meaning: 'a reversible step with one rate, or a one-way step with two' },
   'rates-unchecked': { severity: 'info', meaning: 'too many steps to compile every rate expression while checking' },

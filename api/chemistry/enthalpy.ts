@@ -47,18 +47,19 @@ export function enthalpyOf(species: RegisteredSpecies, lookup: EnthalpyLookup): 
   return species.enthalpy;
 }
 
-/** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength. */
+/** ΔH of a step by Hess's law, and for a photolysis step with ΔH > 0 its threshold wavelength (per photon). */
 export function stepEnthalpy(step: StepModel, lookup: EnthalpyLookup): StepEnthalpy {
   const net = stepNet;
   clearNet(net);
-  let photolysis = false;
+  let photons = 0;
   for (const term of step.reactants) {
     addToNet(net, term.key, -term.coef, enthalpyOf(term.species, lookup));
-    if (term.species.kind === 'photon') photolysis = true;
+    if (term.species.kind === 'photon') photons += term.coef;
   }
   for (const term of step.products) addToNet(net, term.key, term.coef, enthalpyOf(term.species, lookup));
   const { dH, missing, used } = netEnthalpy(net, lookup);
-  return { dH, missing, used, thresholdNm: photolysis && dH !== null ? thresholdWavelengthNm(dH) : null };
+  // Each of n photons (2 hν) brings ΔH / n: the threshold is the longest wavelength one photon may have.
+  return { dH, missing, used, thresholdNm: photons > 0 && dH !== null ? thresholdWavelengthNm(dH / photons) : null };
 }
 
 // One scratch net reaction for every step (a step is computed synchronously, and a table per step

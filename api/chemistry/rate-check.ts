@@ -28,11 +28,15 @@ function describeScope(scope: RateScope): string {
 /**
  * Evaluates a compiled rate at the mechanism's conditions: a rate that throws, is not a finite
  * number or is negative would stop a simulation there, so the checker says so first. A rate that
- * reads [M] where the unit has none (a surface) is left to the simulator, which asks for M.
+ * reads [M] where the unit has none (a surface) and %conditions gives none cannot be evaluated: said so.
  */
 function checkValue(step: StepModel, direction: 'forward' | 'reverse', compiled: CompiledRate, scope: RateScope, at: { line: number; column: number }, diagnostics: Diagnostic[]): void {
-  if (compiled.containsThirdBody && !Number.isFinite(scope.M)) return;
   const where = `the ${direction} rate of step ${step.id}`;
+  if (compiled.containsThirdBody && !Number.isFinite(scope.M)) {
+    const message = `${where} reads [M], which has no value here (a surface unit has no ideal-gas [M]): give M in %conditions to check and simulate it`;
+    diagnostics.push(finding('third-body-unknown', at, message, { found: compiled.text }));
+    return;
+  }
   let value: unknown;
   try {
     value = compiled.evaluate(scope);

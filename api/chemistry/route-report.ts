@@ -77,7 +77,8 @@ function roleRoute(routes: readonly RouteJson[], overall: number | null): number
   const forwards = routes.findIndex((route) => route.kind === 'productive' && route.reversesOneWay.length === 0);
   if (forwards >= 0) return forwards;
   const any = routes.findIndex((route) => route.kind === 'productive');
-  return any >= 0 ? any : null;
+  // With null cycles only, the overall one still tells catalysts (first met as reactants) from intermediates.
+  return any >= 0 ? any : overall;
 }
 
 function reportRouteNotes(set: RouteSet, productive: boolean, maxRouteSteps: number, context: RouteContext): void {

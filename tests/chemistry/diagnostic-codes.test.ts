@@ -63,6 +63,7 @@ const TRIGGERS: Record<DiagnosticCode, { text: string | (() => string); line: nu
   // `exp(` is never closed: mathjs finds the end of the expression at its 15th character.
   'rate-expression': { text: 'R1: CH4 + OH• -> CH3• + H2O @ 6.4e-15 * exp(', line: 1, column: 45 },
   'rate-not-finite': { text: 'O(3P) + O3 -> 2 O2 @ 1/0', line: 1, column: 22 },
+  'third-body-unknown': { text: '%units conc = mol m^-2\nO* + CO* + M -> CO2 + 2 * + M @ 1e3 * M', line: 2, column: 33 },
   'rate-negative': { text: '%conditions T = 200 K\nO(3P) + O3 -> 2 O2 @ 8e-12 * (T - 250)', line: 2, column: 22 },
   'rate-count': { text: 'N2O4 <=> 2 NO2• @ 1.0e5', line: 1, column: 17 },
   'rates-unchecked': { text: () => generateMechanism(MAX_RATE_CHECK_STEPS + 1), line: 3, column: 1 },

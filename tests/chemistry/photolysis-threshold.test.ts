@@ -18,6 +18,14 @@ describe('photolysis thresholds of steps', () => {
     expect(step.thresholdNm).toBeCloseTo(119_626.6 / 106.499, 0);
   });
 
+  // Two photons share ΔH: each needs 242.6 / 2 kJ/mol, so light shorter than about 986 nm (common practice).
+  it('gives the per-photon threshold of a two-photon step', () => {
+    const [one, two] = analyseMechanism('Cl2 + hν -> 2 Cl•\n2 hν + Cl2 -> 2 Cl•').steps;
+    expect(two.dH).toBe(one.dH);
+    expect(two.thresholdNm).toBeCloseTo(2 * (one.thresholdNm as number), 6);
+    expect(two.thresholdNm).toBeCloseTo(119_626.6 / ((one.dH as number) / 2), 3);
+  });
+
   it('gives no threshold for a step that releases heat or is not a photolysis', () => {
     const analysis = analyseMechanism('Br• + O3 -> BrO• + O2\nO(3P) + O2 + M -> O3 + M');
     expect(analysis.steps.map((step) => [step.photolysis, step.thresholdNm])).toEqual([[false, null], [false, null]]);

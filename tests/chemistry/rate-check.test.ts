@@ -67,8 +67,11 @@ describe('rates after @ are checked with the steps', () => {
     expect(rateFindings(`%conditions T = 200 K\n${step}`)).toMatchObject([{ code: 'rate-negative', severity: 'error', line: 2 }]);
   });
 
-  it('leaves a rate that reads [M] on a surface, where [M] has no ideal-gas value, to the simulator', () => {
-    expect(rateFindings('%units conc = mol m^-2\nO* + CO* + M -> CO2 + 2 * + M @ 1e3 * M')).toEqual([]);
+  it('says a rate that reads [M] on a surface cannot be checked without M in %conditions, and checks it with M', () => {
+    const surface = '%units conc = mol m^-2\nO* + CO* + M -> CO2 + 2 * + M @ -M - 1';
+    expect(rateFindings(surface)).toEqual([]);
+    expect(analyseMechanism(surface).diagnostics.filter((item) => item.code === 'third-body-unknown')).toMatchObject([{ severity: 'warning', line: 2 }]);
+    expect(rateFindings(`%conditions M = 1e-5\n${surface}`)).toMatchObject([{ code: 'rate-negative', line: 3 }]);
   });
 
   it('warns when a reversible step gives one rate and a one-way step two', () => {

@@ -4,6 +4,13 @@ import type { MechanismSettings, NamedParticle } from './directives';
 import { resolveParticle } from './species-resolve';
 import type { SpeciesRegistry } from './species-registry';
 
+/** A species of the steps written like `key` but for its radical marks (NO2 for NO2•), if any. */
+function sameBesidesMarks(key: string, registry: SpeciesRegistry): string | null {
+  const bare = key.replace(/•+/, '');
+  for (const other of registry.byKey.keys()) if (other.replace(/•+/, '') === bare) return other;
+  return null;
+}
+
 /** The species keys a directive names, each with the place it was first written there (in order). */
 function placesOf(named: readonly NamedParticle[], settings: MechanismSettings, registry: SpeciesRegistry, directive: string, diagnostics: Diagnostic[]): Map<string, NamedParticle> {
   const places = new Map<string, NamedParticle>();
@@ -11,7 +18,9 @@ function placesOf(named: readonly NamedParticle[], settings: MechanismSettings, 
     const info = resolveParticle(item.node, settings.declarations).info;
     if (!info || !registry.byKey.has(info.key)) {
       const written = item.node.text;
-      diagnostics.push(finding('unused-directive-species', item, `${directive} names ${written}, which no step uses`, { found: written }));
+      const near = info ? sameBesidesMarks(info.key, registry) : null;
+      const hint = near ? ` (the steps write ${near}; a radical mark is part of a species' name)` : '';
+      diagnostics.push(finding('unused-directive-species', item, `${directive} names ${written}, which no step uses${hint}`, { found: written, ...(near ? { expected: [near] } : {}) }));
       continue;
     }
     if (!places.has(info.key)) places.set(info.key, item);
@@ -51,5 +60,7 @@ export function resolveDirectiveSpecies(settings: MechanismSettings, registry: S
   const places = placesOf(settings.intermediates, settings, registry, '%intermediates', diagnostics);
   reportOneSided(places, registry, diagnostics);
   reportBothWays(places, terminalPlaces, diagnostics);
+  // Every name a slip (each reported above): the automatic choice serves better than cancelling nothing.
+  if (places.size === 0) return { terminal, intermediates: null };
   return { terminal, intermediates: [...places.keys()] };
 }

@@ -86,6 +86,16 @@ describe('choice of intermediates', () => {
     expect(oneSided).toEqual([expect.objectContaining({ severity: 'warning', line: 1, column: 21, found: 'O3' })]);
     expect(oneSided[0].message).toContain('which no step forms');
   });
+
+  it('names the marked spelling when a directive drops the radical mark, and chooses for itself when no pinned name matches', () => {
+    const text = '%terminal NO2, O3\n%intermediates Br, BrO\nB1: Br• + O3 -> BrO• + O2\nB2: BrO• + NO2• + M -> BrONO2 + M';
+    const analysis = analyseMechanism(text);
+    const unused = analysis.diagnostics.filter((item) => item.code === 'unused-directive-species');
+    expect(unused.map((item) => [item.line, item.column, item.expected])).toEqual([[1, 11, ['NO2•']], [2, 16, ['Br•']], [2, 20, ['BrO•']]]);
+    expect(unused[0].message).toContain('the steps write NO2•');
+    // Not "every step a route of its own": the automatic choice cancels BrO•.
+    expect(analysis.intermediates).toEqual(['BrO•']);
+  });
 });
 
 describe('releasing a species, decided by rank for larger mechanisms', () => {

@@ -126,6 +126,10 @@ export function readDirectives(directives: readonly DirectiveNode[], diagnostics
   const places: SetPlaces = new Map();
   for (const directive of directives) {
     if (directive.kind === 'title') {
+      if (directive.text.trim() === '') {
+        diagnostics.push(finding('bad-directive', directive, '%title needs the title after it', { expected: ['%title TEXT'] }));
+        continue;
+      }
       noteRepeat(places, '%title', directive, directive.text, diagnostics);
       settings.title = directive.text;
     } else if (directive.kind === 'units') readUnits(directive.assignments, settings, places, diagnostics);

@@ -36,6 +36,12 @@ describe('directives written more than once', () => {
     expect(codes(['%conditions T = 298 K', '%conditions T = 298 K'])).not.toContain('directive-repeated');
   });
 
+  it('refuses a %title with only blanks after it, and keeps the earlier title', () => {
+    const analysis = read(['%title Salt pan, noon', '%title   ']);
+    expect(analysis.title).toBe('Salt pan, noon');
+    expect(analysis.diagnostics.filter((item) => item.code === 'bad-directive')).toMatchObject([{ severity: 'error', line: 2, column: 1 }]);
+  });
+
   it('keeps an earlier valid condition when a later one cannot be read', () => {
     const analysis = read(['%conditions T = 298 K', '%conditions T = -5']);
     expect(analysis.conditions.T).toBe(298);

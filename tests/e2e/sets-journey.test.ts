@@ -91,3 +91,57 @@ describe('an instructor builds, changes and deletes a set', () => {
     expect(await page.getByRole('cell', { name: 'Halogen cycles, day 2' }).count()).toBe(0);
   });
 });
+
+describe('the New set dialog at 390 px wide (a phone)', () => {
+  let phone: Page;
+  beforeAll(async () => {
+    phone = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await signInThroughForm(phone, t.url, instructor.email);
+  });
+  afterAll(() => phone.close());
+
+  it('gives the picker, the revision and the note a full-width line each', async () => {
+    await phone.goto(`${t.url}/sets`);
+    await phone.getByRole('button', { name: 'New set' }).click();
+    const dialog = phone.getByRole('dialog', { name: 'New set' });
+    await dialog.locator('#set-item-0-mechanism').fill('bromine');
+    await phone.getByRole('option', { name: /Salt-lake bromine cycle/ }).click();
+    await expect(dialog.getByLabel('Revision of mechanism 1').textContent()).resolves.toMatch(/^r\d/);
+    const fields = await box(dialog.locator('.set-editor-form-item__fields'));
+    const picker = await box(dialog.locator('.set-editor-form-mechanism-picker'));
+    const revision = await box(dialog.locator('.set-editor-form-item__revision'));
+    const note = await box(dialog.getByLabel('Note for mechanism 1'));
+    for (const [name, field] of Object.entries({ picker, revision, note })) {
+      expect(field.width, name).toBeGreaterThan(fields.width - 2);
+    }
+    expect(revision.y).toBeGreaterThanOrEqual(picker.y + picker.height);
+    expect(note.y).toBeGreaterThanOrEqual(revision.y + revision.height);
+    // The placeholder is read whole: its text fits the field's inner width.
+    const clipped = await dialog.getByLabel('Note for mechanism 1').evaluate((input: HTMLInputElement) => {
+      const measure = document.createElement('canvas').getContext('2d')!;
+      measure.font = getComputedStyle(input).font;
+      const style = getComputedStyle(input);
+      const inner = input.clientWidth - parseFloat(style.paddingLeft) - parseFloat(style.paddingRight);
+      return measure.measureText(input.placeholder).width > inner;
+    });
+    expect(clipped).toBe(false);
+    expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await phone.waitForTimeout(300); // the dialog fades in
+    await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'sets-new-390-picked.png') });
+  });
+
+  it('closes the suggestion list when Tab leaves the picker, so Create set takes the click', async () => {
+    const dialog = phone.getByRole('dialog', { name: 'New set' });
+    const input = dialog.locator('#set-item-0-mechanism');
+    await input.fill('');
+    await input.pressSequentially('bromine');
+    await phone.getByRole('option', { name: /Salt-lake bromine cycle/ }).waitFor();
+    await phone.keyboard.press('Tab');
+    await phone.waitForTimeout(500); // longer than the picker's search delay and the list's fade
+    expect(await phone.getByRole('listbox').count()).toBe(0);
+    await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'sets-new-390-after-tab.png') });
+    // The click lands on the button: forced selection emptied the unpicked text, and the form says so.
+    await dialog.getByRole('button', { name: 'Create set' }).click();
+    await dialog.getByText('Mechanism 1: choose a mechanism').waitFor();
+  });
+});

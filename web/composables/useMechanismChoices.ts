@@ -24,5 +24,11 @@ export function useMechanismChoices() {
     }
   }
 
-  return { choices, error, search };
+  /** Drops the search in flight: its answer would open the list again after focus has left. */
+  function cancel(): void {
+    running?.abort();
+    running = null;
+  }
+
+  return { choices, error, search, cancel };
 }

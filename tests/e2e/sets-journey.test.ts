@@ -130,6 +130,22 @@ describe('the New set dialog at 390 px wide (a phone)', () => {
     await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'sets-new-390-picked.png') });
   });
 
+  it('rings the focused text field in the primary colour, 2 px wide, as it does a focused button', async () => {
+    const dialog = phone.getByRole('dialog', { name: 'New set' });
+    const ring = (field: Locator) => field.evaluate((element) => {
+      const style = getComputedStyle(element);
+      return { width: style.outlineWidth, style: style.outlineStyle, color: style.outlineColor };
+    });
+    await dialog.getByLabel('Title').focus();
+    const title = await ring(dialog.getByLabel('Title'));
+    expect(title).toMatchObject({ width: '2px', style: 'solid' });
+    await dialog.getByRole('button', { name: 'Create set' }).focus();
+    expect(title.color).toBe((await ring(dialog.getByRole('button', { name: 'Create set' }))).color);
+    await dialog.getByLabel('Note for mechanism 1').focus();
+    expect(await ring(dialog.getByLabel('Note for mechanism 1'))).toMatchObject({ width: '2px', style: 'solid' });
+    await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'sets-new-390-note-focused.png') });
+  });
+
   it('closes the suggestion list when Tab leaves the picker, so Create set takes the click', async () => {
     const dialog = phone.getByRole('dialog', { name: 'New set' });
     const input = dialog.locator('#set-item-0-mechanism');

@@ -15,6 +15,9 @@ export const CyclewrightPreset = definePreset(Aura, {
   semantic: {
     primary: ink,
     focusRing: { width: '2px', style: 'solid', color: '{primary.600}', offset: '2px' },
+    // Aura gives a focused text field only a faint border colour; ours gets the buttons' 2 px ring,
+    // on every field (inputs, selects, pickers), so the keyboard's place is plain to see.
+    formField: { focusRing: { width: '2px', style: 'solid', color: '{primary.600}', offset: '1px', shadow: 'none' } },
     colorScheme: {
       light: {
         surface: graphite,

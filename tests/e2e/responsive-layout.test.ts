@@ -151,7 +151,8 @@ describe('new mechanism, history and comparison', () => {
   it('the History section has no select-all box, one-line "vs r1" links and a styled upload button', async () => {
     await page.locator('.cm-content').click();
     await page.keyboard.press('Control+End');
-    await page.keyboard.insertText('\nB3: BrO• + BrO• -> 2 Br• + O2   @ 2.4e-12');
+    // A long equation (balanced: Br2 N H O6 on each side), so that the comparison below must wrap it on a phone.
+    await page.keyboard.insertText('\nB3: BrONO2 + HO2• + BrO• -> HOBr + O2 + NO2• + BrO•   @ 2.4e-12');
     await page.keyboard.press('Control+s');
     await page.getByText('Saved r2').waitFor();
     for (const width of [PHONE.width, 1280]) {

@@ -71,4 +71,22 @@ describe('CatalogueView', () => {
     expect(catalogue.createCatalogueEntry).toHaveBeenCalledWith(expect.objectContaining({ name: 'chlorite ion', formula: 'ClO2^-', smiles: 'O=Cl=O' }));
     expect(document.querySelector('#entry-smiles-error')?.textContent).toContain('smiles does not match formula ClO2^-');
   });
+
+  it('puts each refused field’s own sentence under it, without the validator’s summary', async () => {
+    vi.mocked(catalogue.createCatalogueEntry).mockRejectedValue(
+      new ApiError(400, 'VALIDATION_FAILED', 'Invalid input — dfHSource: An enthalpy of formation needs its published source', [
+        { path: ['dfHSource'], message: 'An enthalpy of formation needs its published source' },
+        { path: ['name'], message: 'Give the species a name' },
+      ]),
+    );
+    const wrapper = await openAs(['curator']);
+    await wrapper.get('button.catalogue-view__add').trigger('click');
+    await flushPromises();
+    const form = document.querySelector('form.catalogue-entry-form') as HTMLFormElement;
+    form.dispatchEvent(new Event('submit'));
+    await flushPromises();
+    expect(document.querySelector('#entry-source-error')?.textContent?.trim()).toBe('An enthalpy of formation needs its published source');
+    expect(document.querySelector('#entry-name-error')?.textContent?.trim()).toBe('Give the species a name');
+    expect(document.body.textContent).not.toContain('Invalid input');
+  });
 });

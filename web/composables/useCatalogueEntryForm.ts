@@ -1,5 +1,6 @@
 import { reactive, ref } from 'vue';
 import { ApiError } from '@web/services/http';
+import { fieldErrorsOf } from '@web/services/validation';
 import { createCatalogueEntry, updateCatalogueEntry, type CatalogueEntry, type CatalogueEntryInput } from '@web/services/catalogue';
 
 export type EntryField = keyof CatalogueEntryInput;
@@ -41,6 +42,12 @@ export function useCatalogueEntryForm() {
       return editingId.value === null ? await createCatalogueEntry(input) : await updateCatalogueEntry(editingId.value, input);
     } catch (caught) {
       const error = caught instanceof ApiError ? caught : new ApiError(0, 'UNKNOWN', String(caught));
+      // A refused input: each field's own sentence, not the validator's "Invalid input — field:" summary.
+      const refused = Object.entries(fieldErrorsOf(error)).filter(([field]) => field in values);
+      if (refused.length > 0) {
+        for (const [field, message] of refused) fieldErrors[field as EntryField] = message;
+        return null;
+      }
       const field = fieldOf(error) as EntryField | null;
       if (field && field in values) fieldErrors[field] = error.message;
       else formError.value = error.message;

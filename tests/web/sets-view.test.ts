@@ -37,8 +37,10 @@ const $ = <T extends Element = HTMLElement>(selector: string) => document.queryS
 const button = (name: string) => [...document.querySelectorAll('button')].find((b) => b.textContent?.trim() === name || b.getAttribute('aria-label') === name)!;
 const dialogText = () => $('[role="dialog"]')?.textContent ?? '';
 
+/** Types as a person does: into a field that has focus (the picker searches only while focused). */
 function type(selector: string, value: string): void {
   const input = $<HTMLInputElement>(selector)!;
+  input.focus();
   input.value = value;
   input.dispatchEvent(new Event('input'));
 }

@@ -81,7 +81,7 @@ function markError(context: LineContext, token: Token, message: string): void {
 }
 
 /** Most surface sites one adsorbed species may occupy. */
-export const MAX_SITES = 100;
+const MAX_SITES = 100;
 
 /** The count after `*`: a whole number of sites from 1 (`CO*0` or `O*0.5` is reported, read as 1). */
 function siteCount(token: Token, context: LineContext): number {

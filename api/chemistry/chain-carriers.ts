@@ -1,9 +1,15 @@
 import type { StepJson } from './analysis-types';
 import type { RegisteredSpecies } from './species-registry';
-import { netOf, type StepModel } from './step-model';
+import type { StepModel, StepTerm } from './step-model';
 
 /** Steps that pass a radical on: the count stays (propagation) or rises from a radical (branching). */
 const CARRYING_CLASSES: ReadonlySet<StepJson['class']> = new Set(['propagation', 'branching']);
+
+/** Sign of the net change of a reactant's species over its step (exact): −1 unless it is also a product. */
+function reactantNetSign(term: StepTerm, products: readonly StepTerm[]): number {
+  const across = products.find((item) => item.key === term.key);
+  return across ? across.fraction.sub(term.fraction).sign() : -1;
+}
 
 /**
  * The chain carriers (common practice): radicals that one chain-carrying step consumes and another
@@ -14,17 +20,18 @@ const CARRYING_CLASSES: ReadonlySet<StepJson['class']> = new Set(['propagation',
  * Listed in the species' order of first appearance.
  */
 export function chainCarriers(steps: readonly StepModel[], stepJson: readonly StepJson[], species: readonly RegisteredSpecies[]): string[] {
-  const radicals = new Set(species.filter((item) => item.radical).map((item) => item.key));
   const consumed = new Set<string>();
   const formed = new Set<string>();
+  const note = (term: StepTerm, sign: number, reversible: boolean) => {
+    if (sign === 0 || !term.species.radical) return;
+    if (sign < 0 || reversible) consumed.add(term.key);
+    if (sign > 0 || reversible) formed.add(term.key);
+  };
   for (const step of steps) {
     if (!CARRYING_CLASSES.has(stepJson[step.index].class)) continue;
-    for (const [key, change] of netOf(step)) {
-      if (!radicals.has(key)) continue;
-      const sign = change.sign();
-      if (sign < 0 || step.reversible) consumed.add(key);
-      if (sign > 0 || step.reversible) formed.add(key);
-    }
+    // Steps hold each species once per side (A + A is 2 A), so each term is its species' whole amount there.
+    for (const term of step.reactants) note(term, reactantNetSign(term, step.products), step.reversible);
+    for (const term of step.products) if (!step.reactants.some((item) => item.key === term.key)) note(term, 1, step.reversible);
   }
   return species.filter((item) => consumed.has(item.key) && formed.has(item.key)).map((item) => item.key);
 }

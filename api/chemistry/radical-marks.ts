@@ -38,6 +38,7 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
     if (item.kind !== 'species' || item.electrons === null) continue;
     const position = { line: item.firstLine, column: item.firstColumn };
     const odd = item.electrons % 2 === 1;
+    const triplet = !odd && item.radicalMarks === 0 ? tripletTag(item) : null;
     if (odd && item.radicalMarks === 0) {
       const marked = markedKey(item);
       const message = `${item.key} has ${counted(item.electrons, 'electron')}; mark it as a radical (${marked}) or ignore`;
@@ -47,8 +48,8 @@ export function reportRadicalMarks(species: readonly RegisteredSpecies[], diagno
       const marked = item.key.replace(/•+/, '•');
       const message = `${item.key} shows ${item.radicalMarks} unpaired electrons, but ${counted(item.electrons, 'electron')} leave an odd number unpaired; write ${marked}`;
       diagnostics.push(finding('radical-marks-parity', position, message, { found: item.key, expected: [marked] }));
-    } else if (!odd && item.radicalMarks === 0 && tripletTag(item)) {
-      const marked = item.key.replace(tripletTag(item) as string, `${tripletTag(item)}••`);
+    } else if (triplet) {
+      const marked = item.key.replace(triplet, `${triplet}••`);
       const message = `${item.key} is tagged as a triplet but has no radical mark, so step classes and chain carriers do not count it as a radical; write ${marked} to count its two unpaired electrons`;
       diagnostics.push(finding('triplet-unmarked', position, message, { found: item.key, expected: [marked] }));
     } else if (!odd && item.radicalMarks > 0 && !item.stateTagged) {

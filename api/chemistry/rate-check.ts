@@ -1,8 +1,10 @@
 import type { Diagnostic } from '@grammar/diagnostics';
 import { finding } from './diagnostic-codes';
 import type { MechanismSettings } from './directives';
+import { rateScopeAt } from './kinetics/build-system';
 import { compileRateExpression, type CompiledRate, type RateScope } from './kinetics/expressions/compile-rate';
-import { idealGasConcentration, type ConcentrationUnit } from './kinetics/units';
+import { evaluateRate } from './kinetics/expressions/rate-value';
+import { DEFAULT_PRESSURE_ATM, DEFAULT_TEMPERATURE_K, type ConcentrationUnit } from './kinetics/units';
 import { ratePositions } from './rate-positions';
 import type { StepModel } from './step-model';
 
@@ -13,12 +15,10 @@ import type { StepModel } from './step-model';
  */
 export const MAX_RATE_CHECK_STEPS = 600;
 
-/** The mechanism's own conditions, with the simulator's defaults (298.15 K, 1 atm, ideal-gas [M]). */
-export function checkScope(settings: Pick<MechanismSettings, 'conditions' | 'units'>): RateScope {
-  const T = settings.conditions.T ?? 298.15;
-  const P = settings.conditions.P ?? 1;
-  const M = settings.conditions.M ?? idealGasConcentration(P, T, settings.units.conc as ConcentrationUnit) ?? Number.NaN;
-  return { T, P, M };
+/** The mechanism's own conditions, with the simulator's defaults where it gives none. */
+function checkScope(settings: Pick<MechanismSettings, 'conditions' | 'units'>): RateScope {
+  const { T, P, M } = settings.conditions;
+  return rateScopeAt(settings.units.conc as ConcentrationUnit, { T: T ?? DEFAULT_TEMPERATURE_K, P: P ?? DEFAULT_PRESSURE_ATM, M });
 }
 
 function describeScope(scope: RateScope): string {
@@ -37,17 +37,13 @@ function checkValue(step: StepModel, direction: 'forward' | 'reverse', compiled:
     diagnostics.push(finding('third-body-unknown', at, message, { found: compiled.text }));
     return;
   }
-  let value: unknown;
-  try {
-    value = compiled.evaluate(scope);
-  } catch (error) {
-    diagnostics.push(finding('rate-expression', at, `${where} cannot be evaluated at ${describeScope(scope)}: ${error instanceof Error ? error.message : String(error)}`, { found: compiled.text }));
-    return;
-  }
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    diagnostics.push(finding('rate-not-finite', at, `${where} is not a finite number at ${describeScope(scope)} (${String(value)})`, { found: compiled.text }));
-  } else if (value < 0) {
-    diagnostics.push(finding('rate-negative', at, `${where} is negative at ${describeScope(scope)} (${value.toExponential(2)}); a rate constant is zero or positive`, { found: compiled.text }));
+  const outcome = evaluateRate(compiled, scope);
+  if (outcome.kind === 'threw') {
+    diagnostics.push(finding('rate-expression', at, `${where} cannot be evaluated at ${describeScope(scope)}: ${outcome.reason}`, { found: compiled.text }));
+  } else if (outcome.kind === 'not-finite') {
+    diagnostics.push(finding('rate-not-finite', at, `${where} is not a finite number at ${describeScope(scope)} (${String(outcome.value)})`, { found: compiled.text }));
+  } else if (outcome.kind === 'negative') {
+    diagnostics.push(finding('rate-negative', at, `${where} is negative at ${describeScope(scope)} (${outcome.value.toExponential(2)}); a rate constant is zero or positive`, { found: compiled.text }));
   }
 }
 

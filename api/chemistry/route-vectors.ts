@@ -70,15 +70,14 @@ export function sameRoute(a: readonly bigint[], b: readonly bigint[]): boolean {
 }
 
 /**
- * σ made to run its one-way steps forwards by adding feasible routes through the steps it runs
- * backwards (−F3 becomes +B3 by adding the null cycle F3 + B3), or null when some backward step
+ * σ made to run its one-way steps forwards by adding feasible routes (`helpers`, the smallest first,
+ * so that the fewest other steps are drawn in) through the steps it runs backwards (−F3 becomes
+ * +B3 by adding the null cycle F3 + B3), or null when some backward step
  * has no such route. Adding a feasible route never lowers a one-way entry, so each round removes
  * one backward step for good.
  */
-export function runForwards(sigma: readonly bigint[], feasibleRoutes: readonly bigint[][], reversible: readonly boolean[]): bigint[] | null {
+export function runForwards(sigma: readonly bigint[], helpers: readonly bigint[][], reversible: readonly boolean[]): bigint[] | null {
   let current = sigma.slice();
-  // Smallest first: the fewest other steps drawn in.
-  const helpers = feasibleRoutes.map((route) => ({ route, size: supportOf(route).size })).sort((a, b) => a.size - b.size).map(({ route }) => route);
   for (;;) {
     const step = current.findIndex((value, index) => !reversible[index] && value < 0n);
     if (step < 0) return current.some((value) => value !== 0n) ? coprime(current) : null;

@@ -1,7 +1,7 @@
 import { directRoutes } from './direct-routes';
 import { Fraction } from './fraction';
 import { nullSpace } from './integer-matrix';
-import { coveringRoute, feasible, independentSubset, orient, runForwards, sameRoute } from './route-vectors';
+import { coveringRoute, feasible, independentSubset, orient, runForwards, sameRoute, supportOf } from './route-vectors';
 import { rowsFor, type Stoichiometry } from './stoichiometry';
 
 /** One route: stoichiometric numbers per step (exact integers). */
@@ -48,8 +48,8 @@ function forwardsFirst(rawBasis: readonly bigint[][], direct: readonly bigint[][
   const forwards = rawBasis.filter((sigma) => feasible(sigma, reversible));
   const backwards = rawBasis.filter((sigma) => !feasible(sigma, reversible));
   if (backwards.length === 0) return null;
-  const usable = [...direct, ...forwards];
-  const repaired = backwards.map((sigma) => runForwards(sigma, usable, reversible)).filter((sigma): sigma is bigint[] => sigma !== null);
+  const helpers = [...direct, ...forwards].map((sigma) => ({ sigma, size: supportOf(sigma).size })).sort((a, b) => a.size - b.size).map(({ sigma }) => sigma);
+  const repaired = backwards.map((sigma) => runForwards(sigma, helpers, reversible)).filter((sigma): sigma is bigint[] => sigma !== null);
   return repaired.length > 0 ? [...forwards, ...repaired, ...backwards] : null;
 }
 

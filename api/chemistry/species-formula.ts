@@ -28,7 +28,7 @@ export function looksLikeFormula(word: string): boolean {
  * thousand carbons), and low enough that no atom total, even through nested groups, loses
  * exactness in a double (see MAX_ATOMS).
  */
-export const MAX_FORMULA_COUNT = 100_000;
+const MAX_FORMULA_COUNT = 100_000;
 /** The most atoms of one element a formula may total (nested group counts multiply). */
 const MAX_ATOMS = 1_000_000_000;
 

@@ -78,11 +78,16 @@ function sameRadical(written: number, declared: number, elements: Map<string, nu
   return elements !== null && declared === 0 && written === 1 && electronCount(elements, charge) % 2 === 1;
 }
 
+/** The charge a declaration gives its name (0 for an opaque name). */
+function declaredCharge(declared: DeclaredSpecies): number {
+  return declared.species ? readCharge(declared.species.charge, declared.species.column).value : 0;
+}
+
 /** A charge written on a name declared with a composition must be the declared charge. */
 function chargeProblem(node: SpeciesNode, declared: DeclaredSpecies, written: number): FormulaProblem | null {
   const source = declared.species;
   if (!source || !node.charge) return null;
-  const own = readCharge(source.charge, source.column).value;
+  const own = declaredCharge(declared);
   if (written === own) return null;
   const message = `${declared.name} is declared on line ${declared.line} as ${source.text} (charge ${own < 0 ? `−${-own}` : own}); written here with ${node.charge.text}, it would be another species: write ${declared.name}, or declare a name for this ion`;
   return { code: 'bad-declaration', offset: node.charge.column - node.column, found: node.charge.text, message };
@@ -91,7 +96,7 @@ function chargeProblem(node: SpeciesNode, declared: DeclaredSpecies, written: nu
 function declaredComposition(node: SpeciesNode, declared: DeclaredSpecies, charge: number | null): Composition {
   const source = declared.species;
   const inner = source ? countElements(source.formula) : null;
-  const innerCharge = source ? readCharge(source.charge, source.column).value : 0;
+  const innerCharge = declaredCharge(declared);
   const states = [...(source?.states ?? []), ...node.states];
   const declaredMarks = source?.radicalMarks ?? 0;
   const elements = inner ? inner.elements : null;

@@ -1,8 +1,9 @@
 import { compileRateExpression, type RateScope } from './expressions/compile-rate';
+import { evaluateRate } from './expressions/rate-value';
 import type { Conditions, KineticModel, KineticsDiagnostic, KineticStep, TextPosition } from './model';
 import { mergeSide, netStoichiometry, type RateSystem, type SystemStep } from './rate-system';
 import { checkRateMagnitude } from './unit-check';
-import { idealGasConcentration } from './units';
+import { idealGasConcentration, type ConcentrationUnit } from './units';
 
 type Direction = 'forward' | 'reverse';
 
@@ -42,24 +43,23 @@ function rateConstant(context: StepContext, direction: Direction): number | null
     report(context, 'third-body-unknown', 'this step needs [M]: give M in %conditions (surface units have no ideal-gas [M])', at);
     return null;
   }
-  let value: unknown;
-  try {
-    value = compiled.evaluate(scope);
-  } catch (error) {
-    // A function refusing its arguments (falloff with Fc > 1, say) says why, at the expression.
-    report(context, 'rate-expression', `${direction} rate: ${error instanceof Error ? error.message : String(error)}`, at);
+  const outcome = evaluateRate(compiled, scope);
+  // A function refusing its arguments (falloff with Fc > 1, say) says why, at the expression.
+  if (outcome.kind === 'threw') {
+    report(context, 'rate-expression', `${direction} rate: ${outcome.reason}`, at);
     return null;
   }
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
+  if (outcome.kind === 'not-finite') {
     report(context, 'rate-not-finite', `${direction} rate "${text}" does not give a finite number at the conditions`, at);
     return null;
   }
   // A negative rate constant has no meaning in mass action (it would run the step backwards
   // without its reverse's stoichiometry); integrating it only exhausts the step budget.
-  if (value < 0) {
-    report(context, 'rate-negative', `${direction} rate "${text}" is negative at the conditions (${value.toExponential(2)}); a rate constant is zero or positive`, at);
+  if (outcome.kind === 'negative') {
+    report(context, 'rate-negative', `${direction} rate "${text}" is negative at the conditions (${outcome.value.toExponential(2)}); a rate constant is zero or positive`, at);
     return null;
   }
+  const { value } = outcome;
   const order = sideOrder(direction === 'forward' ? step.reactants : step.products) + (multipliesByM ? 1 : 0);
   const photolysis = step.photolysis && direction === 'forward';
   for (const warning of checkRateMagnitude({ order, unit: context.model.unit, value, photolysis })) {
@@ -87,9 +87,15 @@ function buildStep(context: StepContext): SystemStep | null {
   };
 }
 
-function thirdBodyOf(model: KineticModel, conditions: Conditions): number | null {
+/** [M] as given, else from the ideal gas law; null for a surface unit without a given M. */
+function thirdBodyOf(unit: ConcentrationUnit, conditions: Conditions): number | null {
   if (typeof conditions.M === 'number') return conditions.M;
-  return idealGasConcentration(conditions.P, conditions.T, model.unit);
+  return idealGasConcentration(conditions.P, conditions.T, unit);
+}
+
+/** The values a rate expression reads at these conditions ([M] NaN when it has none). */
+export function rateScopeAt(unit: ConcentrationUnit, conditions: Conditions): RateScope {
+  return { T: conditions.T, P: conditions.P, M: thirdBodyOf(unit, conditions) ?? Number.NaN };
 }
 
 /**
@@ -99,8 +105,8 @@ function thirdBodyOf(model: KineticModel, conditions: Conditions): number | null
  */
 export function buildRateSystem(model: KineticModel, conditions: Conditions): { system: RateSystem | null; diagnostics: KineticsDiagnostic[] } {
   const diagnostics: KineticsDiagnostic[] = [];
-  const thirdBody = thirdBodyOf(model, conditions);
-  const scope = { T: conditions.T, P: conditions.P, M: thirdBody ?? NaN };
+  const thirdBody = thirdBodyOf(model.unit, conditions);
+  const scope = rateScopeAt(model.unit, conditions);
   const steps = model.steps.map((step, stepIndex) => buildStep({ model, step, stepIndex, scope, diagnostics }));
   if (steps.some((step) => step === null)) return { system: null, diagnostics };
   return { system: { speciesCount: model.species.length, steps: steps as SystemStep[], thirdBody }, diagnostics };

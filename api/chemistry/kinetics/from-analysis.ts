@@ -2,7 +2,7 @@ import type { MechanismAnalysis } from '../analysis-types';
 import type { Composition } from './analysis/element-drift';
 import type { Conditions, KineticModel, KineticsDiagnostic, KineticStep, SpeciesTerm } from './model';
 import type { RouteInput } from './simulation-types';
-import type { ConcentrationUnit } from './units';
+import { DEFAULT_PRESSURE_ATM, DEFAULT_TEMPERATURE_K, type ConcentrationUnit } from './units';
 import { ratePositions } from '../rate-positions';
 
 /** Everything a simulation needs from a mechanism analysis, besides the user's run settings. */
@@ -78,7 +78,7 @@ export function kineticsFromAnalysis(analysis: MechanismAnalysis, sourceText?: s
   const { T, P, M } = analysis.conditions;
   return {
     model: complete ? { species: kept.map((species) => species.key), steps: steps as KineticStep[], unit } : null,
-    conditions: { T: T ?? 298.15, P: P ?? 1, M },
+    conditions: { T: T ?? DEFAULT_TEMPERATURE_K, P: P ?? DEFAULT_PRESSURE_ATM, M },
     composition: kept.map((species) => (species.opaque ? null : species.elements)),
     routes: analysis.routes.flatMap((route, r) => (route.basis ? [{ name: `route ${r + 1}: ${route.net}`, multipliers: route.multipliers }] : [])),
     intermediates: analysis.intermediates,

@@ -1,6 +1,10 @@
 /** Concentration units of `%units` (step-notation.md); time is always in seconds. */
 export type ConcentrationUnit = 'molecule cm^-3' | 'mol L^-1' | 'mol m^-2';
 
+/** Conditions a mechanism is simulated and checked at when %conditions gives none (K, atm). */
+export const DEFAULT_TEMPERATURE_K = 298.15;
+export const DEFAULT_PRESSURE_ATM = 1;
+
 /** Boltzmann constant, J K⁻¹ (CODATA 2018, exact in the 2019 SI). */
 export const BOLTZMANN = 1.380649e-23;
 /** Avogadro constant, mol⁻¹ (CODATA 2018, exact in the 2019 SI). */
